@@ -1,0 +1,16 @@
+import type { ReactNode } from "react";
+import { AppHeader } from "@/components/layout/app-header";
+import { requirePageActor } from "@/lib/auth/page-guards";
+
+// Client and carer screens: mobile first, large targets, calm.
+export default async function HomeLayout({ children }: { children: ReactNode }) {
+  const actor = await requirePageActor("client", "carer");
+  return (
+    <>
+      <AppHeader actor={actor} nav={[{ href: "/today", label: "Today" }]} />
+      <main id="main" className="mx-auto max-w-2xl px-4 py-6 text-lg">
+        {children}
+      </main>
+    </>
+  );
+}

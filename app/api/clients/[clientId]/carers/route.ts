@@ -1,0 +1,8 @@
+import { inviteCarer } from "@/lib/invitations/invite-carer";
+import { inviteCarerSchema } from "@/lib/invitations/schemas";
+import { route } from "@/lib/http/route";
+
+export const POST = route<typeof inviteCarerSchema, { clientId: string }>(
+  { roles: ["client", "therapist"], body: inviteCarerSchema, status: 201 },
+  ({ actor, data, params }) => inviteCarer(actor, params.clientId, data),
+);

@@ -1,0 +1,272 @@
+import { relations } from "drizzle-orm";
+import { bigint, boolean, index, jsonb, pgTable, text, timestamp, uniqueIndex } from "drizzle-orm/pg-core";
+
+// Column names are snake_case in PostgreSQL (set by `casing` in db/client.ts and drizzle.config.ts); the property
+// names below are the ones better-auth's drizzle adapter expects for its own tables.
+const id = () => text().primaryKey().$defaultFn(() => crypto.randomUUID());
+const createdAt = () => timestamp({ withTimezone: true }).notNull().defaultNow();
+const updatedAt = () =>
+  timestamp({ withTimezone: true })
+    .notNull()
+    .defaultNow()
+    .$onUpdate(() => new Date());
+
+// ---------------------------------------------------------------------------------------------------------------
+// better-auth core tables (email and password), with the admin plugin's ban fields used to deactivate people.
+export const user = pgTable("user", {
+  id: text().primaryKey(),
+  name: text().notNull(),
+  email: text().notNull().unique(),
+  emailVerified: boolean().notNull().default(false),
+  image: text(),
+  role: text(),
+  banned: boolean().default(false),
+  banReason: text(),
+  banExpires: timestamp({ withTimezone: true }),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+});
+export type User = typeof user.$inferSelect;
+export type NewUser = typeof user.$inferInsert;
+
+export const session = pgTable(
+  "session",
+  {
+    id: text().primaryKey(),
+    expiresAt: timestamp({ withTimezone: true }).notNull(),
+    token: text().notNull().unique(),
+    ipAddress: text(),
+    userAgent: text(),
+    userId: text()
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    activeOrganizationId: text(),
+    impersonatedBy: text(),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (table) => [index("session_user_id_idx").on(table.userId)],
+);
+export type Session = typeof session.$inferSelect;
+
+export const account = pgTable(
+  "account",
+  {
+    id: text().primaryKey(),
+    accountId: text().notNull(),
+    providerId: text().notNull(),
+    userId: text()
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    accessToken: text(),
+    refreshToken: text(),
+    idToken: text(),
+    accessTokenExpiresAt: timestamp({ withTimezone: true }),
+    refreshTokenExpiresAt: timestamp({ withTimezone: true }),
+    scope: text(),
+    password: text(),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (table) => [index("account_user_id_idx").on(table.userId)],
+);
+export type Account = typeof account.$inferSelect;
+
+export const verification = pgTable(
+  "verification",
+  {
+    id: text().primaryKey(),
+    identifier: text().notNull(),
+    value: text().notNull(),
+    expiresAt: timestamp({ withTimezone: true }).notNull(),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (table) => [index("verification_identifier_idx").on(table.identifier)],
+);
+
+// Rate-limit counters live in PostgreSQL so that every web instance shares them.
+export const rateLimit = pgTable("rate_limit", {
+  id: text().primaryKey(),
+  key: text().notNull().unique(),
+  count: bigint({ mode: "number" }).notNull(),
+  lastRequest: bigint({ mode: "number" }).notNull(),
+});
+
+// ---------------------------------------------------------------------------------------------------------------
+// better-auth organization plugin: a clinic is an organization; its people are members with one of Rampline's roles.
+export const organization = pgTable("organization", {
+  id: text().primaryKey(),
+  name: text().notNull(),
+  slug: text().notNull().unique(),
+  logo: text(),
+  metadata: text(),
+  createdAt: createdAt(),
+});
+export type Organization = typeof organization.$inferSelect;
+
+export const member = pgTable(
+  "member",
+  {
+    id: text().primaryKey(),
+    organizationId: text()
+      .notNull()
+      .references(() => organization.id, { onDelete: "cascade" }),
+    userId: text()
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    role: text().notNull(),
+    createdAt: createdAt(),
+  },
+  (table) => [uniqueIndex("member_organization_user_idx").on(table.organizationId, table.userId)],
+);
+export type Member = typeof member.$inferSelect;
+
+export const invitation = pgTable(
+  "invitation",
+  {
+    id: text().primaryKey(),
+    organizationId: text()
+      .notNull()
+      .references(() => organization.id, { onDelete: "cascade" }),
+    email: text().notNull(),
+    role: text(),
+    status: text().notNull().default("pending"),
+    expiresAt: timestamp({ withTimezone: true }).notNull(),
+    inviterId: text()
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    // Rampline's additions: the invitee's name (for the e-mail and the accept page) and, for a client or carer
+    // invitation, the client record it belongs to.
+    inviteeName: text(),
+    clientId: text(),
+    createdAt: createdAt(),
+  },
+  (table) => [index("invitation_email_idx").on(table.email)],
+);
+export type Invitation = typeof invitation.$inferSelect;
+
+// ---------------------------------------------------------------------------------------------------------------
+// Rampline's own tables.
+
+// A person receiving stimulation. The record exists from the moment the therapist invites them; `userId` is filled
+// in when they accept and set a password.
+export const client = pgTable(
+  "client",
+  {
+    id: id(),
+    organizationId: text()
+      .notNull()
+      .references(() => organization.id, { onDelete: "cascade" }),
+    userId: text().references(() => user.id, { onDelete: "set null" }).unique(),
+    fullName: text().notNull(),
+    email: text().notNull(),
+    primaryTherapistId: text()
+      .notNull()
+      .references(() => user.id),
+    createdById: text()
+      .notNull()
+      .references(() => user.id),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (table) => [
+    index("client_organization_idx").on(table.organizationId),
+    uniqueIndex("client_organization_email_idx").on(table.organizationId, table.email),
+  ],
+);
+export type Client = typeof client.$inferSelect;
+export type NewClient = typeof client.$inferInsert;
+
+// A family member or support worker acting for one client, always with the client's consent on record.
+export const carerLink = pgTable(
+  "carer_link",
+  {
+    id: id(),
+    clientId: text()
+      .notNull()
+      .references(() => client.id, { onDelete: "cascade" }),
+    carerUserId: text().references(() => user.id, { onDelete: "set null" }),
+    invitationId: text().references(() => invitation.id, { onDelete: "set null" }),
+    carerName: text().notNull(),
+    carerEmail: text().notNull(),
+    relationship: text().notNull(),
+    // "client": the client asked for this carer themselves; "recorded-by-therapist": the client told their
+    // therapist, who recorded the consent (with how it was given).
+    consentSource: text({ enum: ["client", "recorded-by-therapist"] }).notNull(),
+    consentMethod: text({ enum: ["in-app", "verbal", "written"] }).notNull(),
+    consentNote: text(),
+    consentRecordedById: text()
+      .notNull()
+      .references(() => user.id),
+    consentRecordedAt: createdAt(),
+    endedAt: timestamp({ withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (table) => [
+    index("carer_link_client_idx").on(table.clientId),
+    index("carer_link_carer_idx").on(table.carerUserId),
+    uniqueIndex("carer_link_client_email_idx").on(table.clientId, table.carerEmail),
+  ],
+);
+export type CarerLink = typeof carerLink.$inferSelect;
+export type NewCarerLink = typeof carerLink.$inferInsert;
+
+// Who did what to which record, with the values before and after, for the clinic's audit trail.
+export const auditEvent = pgTable(
+  "audit_event",
+  {
+    id: id(),
+    organizationId: text().references(() => organization.id, { onDelete: "cascade" }),
+    actorUserId: text().references(() => user.id, { onDelete: "set null" }),
+    action: text().notNull(),
+    entityType: text().notNull(),
+    entityId: text().notNull(),
+    clientId: text().references(() => client.id, { onDelete: "set null" }),
+    before: jsonb(),
+    after: jsonb(),
+    createdAt: createdAt(),
+  },
+  (table) => [
+    index("audit_event_organization_idx").on(table.organizationId, table.createdAt),
+    index("audit_event_client_idx").on(table.clientId),
+  ],
+);
+export type AuditEvent = typeof auditEvent.$inferSelect;
+export type NewAuditEvent = typeof auditEvent.$inferInsert;
+
+// ---------------------------------------------------------------------------------------------------------------
+export const userRelations = relations(user, ({ many }) => ({
+  sessions: many(session),
+  accounts: many(account),
+  memberships: many(member),
+}));
+export const sessionRelations = relations(session, ({ one }) => ({
+  user: one(user, { fields: [session.userId], references: [user.id] }),
+}));
+export const accountRelations = relations(account, ({ one }) => ({
+  user: one(user, { fields: [account.userId], references: [user.id] }),
+}));
+export const organizationRelations = relations(organization, ({ many }) => ({
+  members: many(member),
+  invitations: many(invitation),
+  clients: many(client),
+}));
+export const memberRelations = relations(member, ({ one }) => ({
+  organization: one(organization, { fields: [member.organizationId], references: [organization.id] }),
+  user: one(user, { fields: [member.userId], references: [user.id] }),
+}));
+export const invitationRelations = relations(invitation, ({ one }) => ({
+  organization: one(organization, { fields: [invitation.organizationId], references: [organization.id] }),
+  inviter: one(user, { fields: [invitation.inviterId], references: [user.id] }),
+}));
+export const clientRelations = relations(client, ({ one, many }) => ({
+  organization: one(organization, { fields: [client.organizationId], references: [organization.id] }),
+  user: one(user, { fields: [client.userId], references: [user.id] }),
+  primaryTherapist: one(user, { fields: [client.primaryTherapistId], references: [user.id] }),
+  carers: many(carerLink),
+}));
+export const carerLinkRelations = relations(carerLink, ({ one }) => ({
+  client: one(client, { fields: [carerLink.clientId], references: [client.id] }),
+  carer: one(user, { fields: [carerLink.carerUserId], references: [user.id] }),
+}));

@@ -1,0 +1,12 @@
+import nextCoreWebVitals from "eslint-config-next/core-web-vitals";
+import nextTypeScript from "eslint-config-next/typescript";
+
+const config = [
+  ...nextCoreWebVitals,
+  ...nextTypeScript,
+  {
+    ignores: [".next/**", ".next-test/**", ".data/**", "node_modules/**", "db/migrations/**", "next-env.d.ts"],
+  },
+];
+
+export default config;

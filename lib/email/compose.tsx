@@ -1,0 +1,13 @@
+import type { ReactElement } from "react";
+import { InvitationEmail, invitationSubject } from "@/emails/invitation-email";
+import { PasswordResetEmail, passwordResetSubject } from "@/emails/password-reset-email";
+import type { EmailMessage } from "./messages";
+
+export function composeEmail(message: EmailMessage): { subject: string; element: ReactElement } {
+  switch (message.template) {
+    case "invitation":
+      return { subject: invitationSubject(message.data), element: <InvitationEmail {...message.data} /> };
+    case "password-reset":
+      return { subject: passwordResetSubject(), element: <PasswordResetEmail {...message.data} /> };
+  }
+}

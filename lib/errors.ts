@@ -1,0 +1,44 @@
+// Typed error codes and the one place that maps them to HTTP status codes.
+export const ERROR_STATUS = {
+  BAD_REQUEST: 400,
+  VALIDATION: 400,
+  UNAUTHENTICATED: 401,
+  FORBIDDEN: 403,
+  NOT_FOUND: 404,
+  CONFLICT: 409,
+  GONE: 410,
+  PAYLOAD_TOO_LARGE: 413,
+  UNSUPPORTED_MEDIA_TYPE: 415,
+  RATE_LIMITED: 429,
+  INTERNAL: 500,
+} as const;
+
+export type ErrorCode = keyof typeof ERROR_STATUS;
+export type FieldErrors = Record<string, string>;
+
+export class AppError extends Error {
+  readonly code: ErrorCode;
+  readonly fields?: FieldErrors;
+
+  constructor(code: ErrorCode, message: string, fields?: FieldErrors) {
+    super(message);
+    this.name = "AppError";
+    this.code = code;
+    this.fields = fields;
+  }
+
+  get status(): number {
+    return ERROR_STATUS[this.code];
+  }
+}
+
+export const notSignedIn = () => new AppError("UNAUTHENTICATED", "Please sign in to continue.");
+export const forbidden = () => new AppError("FORBIDDEN", "Your role does not allow this.");
+// Records outside someone's reach are reported as missing, so their existence is not revealed.
+export const notFound = (what = "That record") => new AppError("NOT_FOUND", `${what} was not found.`);
+
+export type ErrorBody = { error: { code: ErrorCode; message: string; fields?: FieldErrors } };
+
+export function errorBody(error: AppError): ErrorBody {
+  return { error: { code: error.code, message: error.message, ...(error.fields ? { fields: error.fields } : {}) } };
+}
