@@ -5,7 +5,7 @@ const config = [
   ...nextCoreWebVitals,
   ...nextTypeScript,
   {
-    ignores: [".next/**", ".next-test/**", ".data/**", "node_modules/**", "db/migrations/**", "next-env.d.ts"],
+    ignores: [".next/**", ".next-*/**", ".data/**", "node_modules/**", "db/migrations/**", "next-env.d.ts"],
   },
 ];
 

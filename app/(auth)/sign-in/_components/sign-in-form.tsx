@@ -39,7 +39,7 @@ export function SignInForm({ passwordWasReset }: { passwordWasReset: boolean }) 
           Sign in with your new password.
         </Notice>
       ) : null}
-      <FormAlert message={formError} />
+      <FormAlert message={formError} word="Not signed in" />
       <TextField label="E-mail address" type="email" autoComplete="email" {...form.register("email")} error={errors.email?.message} />
       <TextField
         label="Password"
