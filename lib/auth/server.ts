@@ -15,6 +15,8 @@ const secureCookies = config.SECURE_COOKIES ?? config.APP_URL.startsWith("https:
 
 export const auth = betterAuth({
   appName: "Rampline",
+  // Failed sign-ins are expected in tests; elsewhere they are worth a warning in the log.
+  logger: { level: config.NODE_ENV === "test" ? "error" : "warn" },
   baseURL: config.APP_URL,
   secret: config.BETTER_AUTH_SECRET,
   trustedOrigins: [config.APP_URL],

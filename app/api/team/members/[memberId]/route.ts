@@ -1,7 +1,11 @@
 import { route } from "@/lib/http/route";
-import { setTherapistActive, setTherapistActiveSchema } from "@/lib/team/set-therapist-active";
+import { requireTherapistMember, setTherapistActive, setTherapistActiveSchema } from "@/lib/team/set-therapist-active";
 
 export const PATCH = route<typeof setTherapistActiveSchema, { memberId: string }>(
-  { roles: ["admin"], body: setTherapistActiveSchema },
+  {
+    roles: ["admin"],
+    authorize: ({ actor, params }) => requireTherapistMember(actor, params.memberId),
+    body: setTherapistActiveSchema,
+  },
   ({ actor, data, params }) => setTherapistActive(actor, params.memberId, data),
 );
