@@ -35,18 +35,5 @@ NODE_ENV=production npx next start --hostname 127.0.0.1 --port "$APP_PORT" &
 CHILD_PIDS+=($!)
 wait_for_url "$APP_URL/api/health" 60 || fail "Rampline did not start."
 
-cat <<INFO
-
-  Rampline is running:     $APP_URL
-  Demo mailbox (e-mails):  $RESEND_BASE_URL
-  Settings explorer:       $APP_URL/explore
-
-  Demo sign-ins (password for all: rampline-demo)
-    Clinic admin   joanna.pell@larkmoor.example
-    Therapist      priya.raman@larkmoor.example   (also owen.castell@larkmoor.example)
-    Client         arthur.mensah@example.net      (also brenda.k@, callum.reid@, deepa.sharma@example.net)
-    Carer          grace.mensah@example.net       (for Arthur; also ian.reid@example.net for Callum)
-
-  Press Ctrl-C to stop.
-INFO
+npx tsx scripts/print-sign-ins.ts "$APP_URL" "$RESEND_BASE_URL"
 wait -n "${CHILD_PIDS[@]}"

@@ -1,0 +1,127 @@
+import { eq } from "drizzle-orm";
+import { beforeAll, describe, expect, it } from "vitest";
+import { db } from "@/db/client";
+import { member } from "@/db/schema";
+import { createClinic, createPerson, TEST_PASSWORD } from "../support/factories";
+import { demo } from "./support/demo-accounts";
+import { httpRequest, httpSignIn } from "./support/http";
+
+// Every route so far, for every kind of person. "ok" means allowed: pages answer 200 (or redirect to the person's
+// home), JSON writes answer 400 because the matrix sends an empty body, which proves the request got past every
+// access check without creating anything. "in" means a redirect to sign-in.
+type Who = "anonymous" | "client" | "carer" | "therapist" | "otherTherapist" | "admin" | "otherAdmin";
+type Outcome = "ok" | "in" | 401 | 403 | 404;
+const WHO: Who[] = ["anonymous", "client", "carer", "therapist", "otherTherapist", "admin", "otherAdmin"];
+
+const cookies = {} as Record<Who, string | undefined>;
+const ids = { arthur: "demo-client-arthur", brenda: "demo-client-brenda", foreign: "", priyaMember: "" };
+let foreignClientName = "";
+
+beforeAll(async () => {
+  // A second clinic, so that "someone else's clinic" is tested with real rows.
+  const otherClinic = await createClinic("Elsewhere clinic");
+  const otherTherapist = await createPerson(otherClinic, "therapist");
+  const otherAdmin = await createPerson(otherClinic, "admin");
+  const foreign = await createPerson(otherClinic, "client", { therapistId: otherTherapist.userId });
+  ids.foreign = foreign.clientId!;
+  foreignClientName = foreign.name;
+  const [priya] = await db().select().from(member).where(eq(member.userId, "demo-priya"));
+  ids.priyaMember = priya!.id;
+  cookies.client = await httpSignIn(demo.client.email, demo.password);
+  cookies.carer = await httpSignIn(demo.carer.email, demo.password);
+  cookies.therapist = await httpSignIn(demo.therapist.email, demo.password);
+  cookies.admin = await httpSignIn(demo.admin.email, demo.password);
+  cookies.otherTherapist = await httpSignIn(otherTherapist.email, TEST_PASSWORD);
+  cookies.otherAdmin = await httpSignIn(otherAdmin.email, TEST_PASSWORD);
+});
+
+type Row = { method: string; label?: string; path: () => string; body?: unknown; expect: Record<Who, Outcome>; secret?: () => string };
+
+const staffOnly = { anonymous: "in", client: 403, carer: 403 } as const;
+const rows: Row[] = [
+  { method: "GET", path: () => "/", expect: { anonymous: "ok", client: "ok", carer: "ok", therapist: "ok", otherTherapist: "ok", admin: "ok", otherAdmin: "ok" } },
+  { method: "GET", path: () => "/home", expect: { anonymous: "in", client: "ok", carer: "ok", therapist: "ok", otherTherapist: "ok", admin: "ok", otherAdmin: "ok" } },
+  { method: "GET", path: () => "/caseload", expect: { ...staffOnly, therapist: "ok", otherTherapist: "ok", admin: 403, otherAdmin: 403 } },
+  { method: "GET", path: () => "/team", expect: { ...staffOnly, therapist: 403, otherTherapist: 403, admin: "ok", otherAdmin: "ok" } },
+  {
+    method: "GET",
+    label: "/clients/<own clinic's client>",
+    path: () => `/clients/${ids.arthur}`,
+    secret: () => demo.client.name,
+    expect: { ...staffOnly, therapist: "ok", otherTherapist: 404, admin: "ok", otherAdmin: 404 },
+  },
+  {
+    method: "GET",
+    label: "/clients/<other clinic's client>",
+    path: () => `/clients/${ids.foreign}`,
+    secret: () => foreignClientName,
+    expect: { ...staffOnly, therapist: 404, otherTherapist: "ok", admin: 404, otherAdmin: "ok" },
+  },
+  { method: "GET", path: () => "/today", expect: { anonymous: "in", client: "ok", carer: "ok", therapist: 403, otherTherapist: 403, admin: 403, otherAdmin: 403 } },
+  {
+    method: "POST",
+    path: () => "/api/team/invitations",
+    body: {},
+    expect: { anonymous: 401, client: 403, carer: 403, therapist: 403, otherTherapist: 403, admin: "ok", otherAdmin: "ok" },
+  },
+  {
+    method: "PATCH",
+    label: "/api/team/members/<own clinic's therapist>",
+    path: () => `/api/team/members/${ids.priyaMember}`,
+    body: {},
+    expect: { anonymous: 401, client: 403, carer: 403, therapist: 403, otherTherapist: 403, admin: "ok", otherAdmin: 404 },
+  },
+  {
+    method: "POST",
+    path: () => "/api/clients",
+    body: {},
+    expect: { anonymous: 401, client: 403, carer: 403, therapist: "ok", otherTherapist: "ok", admin: 403, otherAdmin: 403 },
+  },
+  {
+    method: "POST",
+    label: "/api/clients/<the client's own record>/carers",
+    path: () => `/api/clients/${ids.arthur}/carers`,
+    body: {},
+    expect: { anonymous: 401, client: "ok", carer: 403, therapist: "ok", otherTherapist: 404, admin: 403, otherAdmin: 403 },
+  },
+  {
+    method: "POST",
+    label: "/api/clients/<another client of the clinic>/carers",
+    path: () => `/api/clients/${ids.brenda}/carers`,
+    body: {},
+    expect: { anonymous: 401, client: 404, carer: 403, therapist: "ok", otherTherapist: 404, admin: 403, otherAdmin: 403 },
+  },
+  // better-auth endpoints Rampline does not use are not reachable at all, whoever asks.
+  ...["/api/auth/sign-up/email", "/api/auth/organization/invite-member", "/api/auth/organization/create", "/api/auth/admin/ban-user", "/api/auth/admin/set-role"].map(
+    (path): Row => ({ method: "POST", path: () => path, body: {}, expect: Object.fromEntries(WHO.map((who) => [who, 404])) as Record<Who, Outcome> }),
+  ),
+];
+
+describe("authorisation matrix", () => {
+  for (const row of rows) {
+    for (const who of WHO) {
+      const expected = row.expect[who];
+      it(`${row.method} ${row.label ?? row.path()} as ${who} → ${expected}`, async () => {
+        const result = await httpRequest(row.method, row.path(), { cookie: cookies[who], body: row.body });
+        if (expected === "in") {
+          expect(result.status).toBe(307);
+          expect(result.location).toMatch(/\/sign-in(\?|$)/);
+        } else if (expected === "ok") {
+          const isApi = row.path().startsWith("/api/");
+          if (isApi) expect(result.status).toBe(400);
+          else expect([200, 307]).toContain(result.status);
+          if (!isApi && result.status === 307) expect(result.location).not.toMatch(/sign-in/);
+        } else {
+          expect(result.status).toBe(expected);
+          if (row.path().startsWith("/api/")) {
+            const body = JSON.parse(result.text) as { error: Record<string, unknown> };
+            expect(Object.keys(body)).toEqual(["error"]);
+            expect(Object.keys(body.error).sort()).toEqual(["code", "message"]);
+          }
+        }
+        // A refusal never carries the record it protects.
+        if (expected !== "ok" && row.secret) expect(result.text).not.toContain(row.secret());
+      });
+    }
+  }
+});
