@@ -45,7 +45,7 @@ export function deriveCycle(c: CycleSettings): CycleDerived {
 
 /**
  * r.m.s. current averaged over an on/off cycle, in the unit of `trainRmsMa`: I_rms·sqrt(on/(on+rest)).
- * Null when on + rest is zero. Which on time to pass is the caller's convention; see API.md.
+ * Null when on + rest is zero. Which on time to pass is the caller's convention; see DEVELOPERS.md (lib/stim).
  */
 export function cycleAveragedRmsMa(trainRmsMa: number, onS: number, restS: number): number | null {
   const share = ratio(onS, onS + restS);

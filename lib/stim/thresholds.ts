@@ -1,5 +1,5 @@
 /**
- * Figures the findings compare against. Each carries the source the findings cite; API.md lists them.
+ * Figures the findings compare against. Each carries the source the findings cite; DEVELOPERS.md (lib/stim) lists them.
  */
 
 /** IEC 60601-2-10:2012: above this, electrodes "may need the operator's special attention"; read as r.m.s. (secondary). */
