@@ -6,7 +6,7 @@ import { AppError, type FieldErrors } from "./errors";
 export function fieldErrorsFrom(error: z.ZodError): FieldErrors {
   const fields: FieldErrors = {};
   for (const issue of error.issues) {
-    const key = issue.path.length > 0 ? issue.path.map(String).join(".") : "_form";
+    const key = issue.path.length > 0 ? issue.path.map(String).join(".") : "_root";
     fields[key] ??= issue.message;
   }
   return fields;
