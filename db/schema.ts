@@ -1,5 +1,5 @@
 import { relations } from "drizzle-orm";
-import { bigint, boolean, index, jsonb, pgTable, text, timestamp, uniqueIndex } from "drizzle-orm/pg-core";
+import { bigint, boolean, date, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex } from "drizzle-orm/pg-core";
 
 // Column names are snake_case in PostgreSQL (set by `casing` in db/client.ts and drizzle.config.ts); the property
 // names below are the ones better-auth's drizzle adapter expects for its own tables.
@@ -161,6 +161,11 @@ export const client = pgTable(
     userId: text().references(() => user.id, { onDelete: "set null" }).unique(),
     fullName: text().notNull(),
     email: text().notNull(),
+    // The clinical summary a therapist keeps on the record; empty until they fill it in.
+    condition: text(),
+    affectedSide: text({ enum: ["left", "right", "both"] }),
+    goals: text(),
+    onsetDate: date(),
     primaryTherapistId: text()
       .notNull()
       .references(() => user.id),
@@ -234,6 +239,154 @@ export const auditEvent = pgTable(
 );
 export type AuditEvent = typeof auditEvent.$inferSelect;
 export type NewAuditEvent = typeof auditEvent.$inferInsert;
+
+// Consent events for one client: each give or withdraw is a new row, so the history stays; the latest row per kind is
+// the consent in force.
+export const CONSENT_KINDS = ["treatment", "remote-monitoring", "photos-care", "photos-teaching"] as const;
+export const consent = pgTable(
+  "consent",
+  {
+    id: id(),
+    clientId: text()
+      .notNull()
+      .references(() => client.id, { onDelete: "cascade" }),
+    kind: text({ enum: CONSENT_KINDS }).notNull(),
+    status: text({ enum: ["given", "withdrawn"] }).notNull(),
+    method: text({ enum: ["verbal", "written", "in-app"] }).notNull(),
+    note: text(),
+    recordedById: text()
+      .notNull()
+      .references(() => user.id),
+    recordedAt: createdAt(),
+  },
+  (table) => [index("consent_client_idx").on(table.clientId, table.kind, table.recordedAt)],
+);
+export type Consent = typeof consent.$inferSelect;
+
+// A signed contraindication screening. Versions are immutable: a re-screen is a new row with the next number.
+export const screening = pgTable(
+  "screening",
+  {
+    id: id(),
+    clientId: text()
+      .notNull()
+      .references(() => client.id, { onDelete: "cascade" }),
+    version: integer().notNull(),
+    answers: jsonb().notNull(),
+    redFlags: jsonb().$type<string[]>().notNull(),
+    outcome: text({ enum: ["eligible", "eligible-with-precautions", "not-eligible"] }).notNull(),
+    rescreenOn: date(),
+    signedById: text()
+      .notNull()
+      .references(() => user.id),
+    signedAt: createdAt(),
+  },
+  (table) => [uniqueIndex("screening_client_version_idx").on(table.clientId, table.version)],
+);
+export type Screening = typeof screening.$inferSelect;
+
+// A named clinician's clearance of one systemic red flag on one screening; publishing waits for every flag's clearance.
+export const redFlagClearance = pgTable(
+  "red_flag_clearance",
+  {
+    id: id(),
+    screeningId: text()
+      .notNull()
+      .references(() => screening.id, { onDelete: "cascade" }),
+    flag: text().notNull(),
+    clinicianName: text().notNull(),
+    note: text().notNull(),
+    recordedById: text()
+      .notNull()
+      .references(() => user.id),
+    recordedAt: createdAt(),
+  },
+  (table) => [uniqueIndex("red_flag_clearance_flag_idx").on(table.screeningId, table.flag)],
+);
+export type RedFlagClearance = typeof redFlagClearance.$inferSelect;
+
+// One programme per client: a working draft (with a revision number so two editors cannot overwrite each other) and
+// the immutable versions published from it.
+export const programme = pgTable("programme", {
+  id: id(),
+  clientId: text()
+    .notNull()
+    .unique()
+    .references(() => client.id, { onDelete: "cascade" }),
+  draft: jsonb(),
+  draftRevision: integer().notNull().default(0),
+  draftUpdatedById: text().references(() => user.id),
+  draftUpdatedAt: timestamp({ withTimezone: true }),
+  createdAt: createdAt(),
+});
+export type Programme = typeof programme.$inferSelect;
+
+export const programmeVersion = pgTable(
+  "programme_version",
+  {
+    id: id(),
+    programmeId: text()
+      .notNull()
+      .references(() => programme.id, { onDelete: "cascade" }),
+    number: integer().notNull(),
+    content: jsonb().notNull(),
+    reason: text().notNull(),
+    // What prompted the change, when it came from a report (a check-in or a flag), for the client's timeline.
+    promptedByType: text(),
+    promptedById: text(),
+    authorId: text()
+      .notNull()
+      .references(() => user.id),
+    publishedAt: createdAt(),
+  },
+  (table) => [uniqueIndex("programme_version_number_idx").on(table.programmeId, table.number)],
+);
+export type ProgrammeVersion = typeof programmeVersion.$inferSelect;
+
+// A clinic's own starting points for new programmes (Rampline's built-in ones live in code).
+export const programmeTemplate = pgTable("programme_template", {
+  id: id(),
+  organizationId: text()
+    .notNull()
+    .references(() => organization.id, { onDelete: "cascade" }),
+  name: text().notNull(),
+  description: text(),
+  content: jsonb().notNull(),
+  createdById: text()
+    .notNull()
+    .references(() => user.id),
+  createdAt: createdAt(),
+});
+export type ProgrammeTemplate = typeof programmeTemplate.$inferSelect;
+
+// An uploaded photo, re-encoded without metadata and stored privately; only the client's circle and clinic see it.
+export const PHOTO_KINDS = ["placement", "skin", "message"] as const;
+export const photo = pgTable(
+  "photo",
+  {
+    id: id(),
+    organizationId: text()
+      .notNull()
+      .references(() => organization.id, { onDelete: "cascade" }),
+    clientId: text()
+      .notNull()
+      .references(() => client.id, { onDelete: "cascade" }),
+    kind: text({ enum: PHOTO_KINDS }).notNull(),
+    uploadedById: text()
+      .notNull()
+      .references(() => user.id),
+    contentType: text().notNull(),
+    width: integer().notNull(),
+    height: integer().notNull(),
+    bytes: integer().notNull(),
+    storageKey: text().notNull(),
+    thumbnailKey: text().notNull(),
+    createdAt: createdAt(),
+  },
+  (table) => [index("photo_client_idx").on(table.clientId)],
+);
+export type Photo = typeof photo.$inferSelect;
+export type NewPhoto = typeof photo.$inferInsert;
 
 // ---------------------------------------------------------------------------------------------------------------
 export const userRelations = relations(user, ({ many }) => ({

@@ -20,6 +20,8 @@ const envSchema = z.object({
   SIGN_IN_RATE_LIMIT_MAX: z.coerce.number().int().min(1).max(10_000).default(5),
   SIGN_IN_RATE_LIMIT_WINDOW_SECONDS: z.coerce.number().int().min(1).max(86_400).default(60),
   SECURE_COOKIES: booleanish.optional(),
+  // Where uploaded photos are kept on local disk (the default storage); never inside public/.
+  STORAGE_DIR: z.string().min(1).default(".data/uploads"),
 });
 
 export type Env = z.infer<typeof envSchema>;

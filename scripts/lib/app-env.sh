@@ -14,5 +14,6 @@ export_app_env() {
   export MAIL_FAKE_API_KEY="$RESEND_API_KEY"
   export MAIL_FAKE_STORE="$mail_store"
   export NEXT_DIST_DIR="$dist_dir"
+  export STORAGE_DIR="$DATA_DIR/uploads-$database"
   export NEXT_TELEMETRY_DISABLED=1
 }
