@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
-import { EXAMPLE_VALUES, toChannelInput, toNumber, unplacedErrors, type ExploreValues } from "@/app/(public)/explore/_components/explore-values";
+import { EXAMPLE_VALUES, toChannelInput, toNumber, unplacedErrors, type SettingsFormValues } from "@/components/stim-settings/values";
 import { analyseChannel } from "@/lib/stim";
 
-const withValues = (patch: Partial<ExploreValues>): ExploreValues => ({ ...EXAMPLE_VALUES, ...patch });
+const withValues = (patch: Partial<SettingsFormValues>): SettingsFormValues => ({ ...EXAMPLE_VALUES, ...patch });
 
 describe("the explorer's form values", () => {
   it("reads blank boxes as not entered and leaves text that is not a number as typed", () => {

@@ -1,27 +1,27 @@
 "use client";
 import { useMemo } from "react";
-import { useForm, useWatch } from "react-hook-form";
+import { useForm, useWatch, type Path } from "react-hook-form";
 import { StimPicture } from "@/components/stim-picture";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { analyseChannel } from "@/lib/stim";
-import { ContextFields } from "./context-fields";
-import { CycleFields, SessionFields } from "./cycle-fields";
-import { ElectrodeFields } from "./electrode-fields";
-import { EXAMPLE_VALUES, toChannelInput, unplacedErrors, type ExploreValues } from "./explore-values";
-import { PulseFields } from "./pulse-fields";
+import { ContextFields } from "@/components/stim-settings/context-fields";
+import { CycleFields, SessionFields } from "@/components/stim-settings/cycle-fields";
+import { ElectrodeFields } from "@/components/stim-settings/electrode-fields";
+import { PulseFields } from "@/components/stim-settings/pulse-fields";
+import { EXAMPLE_VALUES, toChannelInput, unplacedErrors, type SettingsFormValues } from "@/components/stim-settings/values";
 
 // The form and the picture side by side. Nothing is submitted: every change is analysed in the browser by the
 // same pure function the server uses, and the analysis's own field messages are shown on the fields.
 export function ExploreWorkbench() {
-  const form = useForm<ExploreValues>({ defaultValues: EXAMPLE_VALUES });
+  const form = useForm<SettingsFormValues>({ defaultValues: EXAMPLE_VALUES });
   const { register, control } = form;
   // Every field is registered with a default and none unregisters, so the watched values are complete.
-  const values = useWatch({ control }) as ExploreValues;
+  const values = useWatch({ control }) as SettingsFormValues;
   const analysis = useMemo(() => analyseChannel(toChannelInput(values)), [values]);
   const errors = analysis.fieldErrors;
   const others = unplacedErrors(errors, values);
-  const groups = { register, errors, values };
+  const groups = { register: (name: string) => register(name as Path<SettingsFormValues>), errors, values };
   return (
     <div className="grid gap-10 lg:grid-cols-[minmax(0,5fr)_minmax(0,6fr)]">
       <section aria-labelledby="explore-settings" className="flex flex-col gap-6">

@@ -1,6 +1,6 @@
-import { SelectField } from "./choice-fields";
+import { SelectField } from "@/components/ui/choice-fields";
 import type { FieldGroupProps } from "./field-props";
-import { NumberField } from "./number-field";
+import { NumberField } from "@/components/ui/number-field";
 
 const SHAPES = [
   { value: "round", label: "Round" },

@@ -1,6 +1,6 @@
-import { Choice } from "./choice-fields";
+import { Choice } from "@/components/ui/choice-fields";
 import type { FieldGroupProps } from "./field-props";
-import { NumberField } from "./number-field";
+import { NumberField } from "@/components/ui/number-field";
 
 const WAVEFORMS = [
   { value: "symmetric-biphasic", label: "Symmetric biphasic", hint: "Two equal phases of opposite sign." },

@@ -1,6 +1,6 @@
 import type { BodyRegion, Waveform } from "@/lib/stim";
 
-// What the explorer's form holds: the raw strings of its number inputs, as typed. `toChannelInput` turns them
+// What a channel-settings form holds (the explorer's, and each channel of the programme builder): the raw strings of its number inputs, as typed. `toChannelInput` turns them
 // into the JSON shape analyseChannel reads, so the analysis (not the form) decides what is valid.
 
 export type ElectrodeShape = "round" | "square" | "rectangle";
@@ -12,7 +12,8 @@ export type WaveformValues = {
   secondPhaseDurationUs: string;
 };
 
-export interface ExploreValues {
+/** One channel's own settings: what the programme builder keeps per channel. */
+export interface ChannelSettingsFormValues {
   frequencyHz: string;
   phaseDurationUs: string;
   waveform: WaveformValues;
@@ -21,23 +22,27 @@ export interface ExploreValues {
   rampDownS: string;
   restS: string;
   amplitudeCeilingMa: string;
+  electrodes: [ElectrodeValues, ElectrodeValues];
+  interElectrodeSpacingCm: string;
+}
+
+/** The explorer's whole form: a channel plus the schedule and context the builder keeps elsewhere. */
+export interface SettingsFormValues extends ChannelSettingsFormValues {
   sessionMinutes: string;
   sessionsPerDay: string;
   daysPerWeek: string;
-  electrodes: [ElectrodeValues, ElectrodeValues];
-  interElectrodeSpacingCm: string;
   bodyRegion: BodyRegion | "";
   earlyProgramme: boolean;
 }
 
-const twoInchRound = (): ElectrodeValues => ({ shape: "round", diameter: "2", side: "2", width: "2", length: "4", unit: "in" });
+export const twoInchRound = (): ElectrodeValues => ({ shape: "round", diameter: "2", side: "2", width: "2", length: "4", unit: "in" });
 
 /**
  * An example starting point, not a recommendation: the middle of the trade's usual ranges (common practice, no
  * published source) for frequency, pulse duration, ramps, hold, rest, electrodes and session length. The
  * amplitude ceiling and the asymmetric second phase are invented example values.
  */
-export const EXAMPLE_VALUES: ExploreValues = {
+export const EXAMPLE_VALUES: SettingsFormValues = {
   frequencyHz: "35",
   phaseDurationUs: "300",
   waveform: { kind: "symmetric-biphasic", interphaseGapUs: "", secondPhaseAmplitudeMa: "10", secondPhaseDurationUs: "1200" },
@@ -76,8 +81,8 @@ function waveformInput(w: WaveformValues) {
   return { kind: w.kind, secondPhaseAmplitudeMa: toNumber(w.secondPhaseAmplitudeMa), secondPhaseDurationUs: toNumber(w.secondPhaseDurationUs), interphaseGapUs: gap };
 }
 
-/** The form's values as analyseChannel's input; optional fields left blank are left out. */
-export function toChannelInput(v: ExploreValues): Record<string, unknown> {
+/** A channel's own settings in the JSON shape lib/stim reads; optional fields left blank are left out. */
+export function toChannelSettingsInput(v: ChannelSettingsFormValues): Record<string, unknown> {
   return {
     frequencyHz: toNumber(v.frequencyHz),
     phaseDurationUs: toNumber(v.phaseDurationUs),
@@ -87,11 +92,18 @@ export function toChannelInput(v: ExploreValues): Record<string, unknown> {
     rampDownS: toNumber(v.rampDownS),
     restS: toNumber(v.restS),
     amplitudeCeilingMa: toNumber(v.amplitudeCeilingMa),
+    electrodes: v.electrodes.map(electrodeInput),
+    interElectrodeSpacingCm: toNumber(v.interElectrodeSpacingCm),
+  };
+}
+
+/** The explorer's values as analyseChannel's input; optional fields left blank are left out. */
+export function toChannelInput(v: SettingsFormValues): Record<string, unknown> {
+  return {
+    ...toChannelSettingsInput(v),
     sessionMinutes: toNumber(v.sessionMinutes),
     sessionsPerDay: toNumber(v.sessionsPerDay),
     daysPerWeek: toNumber(v.daysPerWeek),
-    electrodes: v.electrodes.map(electrodeInput),
-    interElectrodeSpacingCm: toNumber(v.interElectrodeSpacingCm),
     bodyRegion: v.bodyRegion === "" ? undefined : v.bodyRegion,
     earlyProgramme: v.earlyProgramme,
   };
@@ -104,7 +116,7 @@ const SIZE_FIELDS: Record<ElectrodeShape, Array<keyof ElectrodeValues>> = {
 };
 
 /** The field paths the form shows for these values: an error on any other path is shown above the form. */
-export function shownFieldPaths(v: ExploreValues): string[] {
+export function shownFieldPaths(v: SettingsFormValues): string[] {
   const paths = ["frequencyHz", "phaseDurationUs", "waveform.kind", "rampUpS", "holdS", "rampDownS", "restS", "amplitudeCeilingMa"];
   paths.push("sessionMinutes", "sessionsPerDay", "daysPerWeek", "interElectrodeSpacingCm", "bodyRegion", "earlyProgramme");
   if (v.waveform.kind !== "monophasic") paths.push("waveform.interphaseGapUs");
@@ -116,7 +128,7 @@ export function shownFieldPaths(v: ExploreValues): string[] {
 }
 
 /** Messages whose field is not on the form (the input as a whole, say), to show once above it. */
-export function unplacedErrors(fieldErrors: Record<string, string>, v: ExploreValues): string[] {
+export function unplacedErrors(fieldErrors: Record<string, string>, v: SettingsFormValues): string[] {
   const shown = new Set(shownFieldPaths(v));
   return Object.entries(fieldErrors)
     .filter(([path]) => !shown.has(path))

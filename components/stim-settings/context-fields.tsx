@@ -1,6 +1,6 @@
-import { Choice, SelectField } from "./choice-fields";
+import { Choice, SelectField } from "@/components/ui/choice-fields";
 import type { FieldGroupProps } from "./field-props";
-import { NumberField } from "./number-field";
+import { NumberField } from "@/components/ui/number-field";
 
 const REGIONS = [
   { value: "", label: "Not given" },
