@@ -40,3 +40,12 @@ export async function listCaseloadByTherapistId(organizationId: string, therapis
     .where(and(eq(client.organizationId, organizationId), eq(client.primaryTherapistId, therapistId)))
     .orderBy(asc(client.fullName));
 }
+
+export async function updateClientDetailsById(
+  clientId: string,
+  values: Pick<NewClient, "condition" | "affectedSide" | "goals" | "onsetDate">,
+  executor: Database = db(),
+) {
+  const [row] = await executor.update(client).set(values).where(eq(client.id, clientId)).returning();
+  return row ?? null;
+}
