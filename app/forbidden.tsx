@@ -1,5 +1,5 @@
-import { ProblemPage } from "@/components/layout/problem-page";
+import { FORBIDDEN_TEXT, ProblemPage } from "@/components/layout/problem-page";
 
 export default function Forbidden() {
-  return <ProblemPage title="Not available to your role">This page is for other members of the clinic.</ProblemPage>;
+  return <ProblemPage title={FORBIDDEN_TEXT.title}>{FORBIDDEN_TEXT.body}</ProblemPage>;
 }

@@ -1,9 +1,5 @@
-import { ProblemPage } from "@/components/layout/problem-page";
+import { NOT_FOUND_TEXT, ProblemPage } from "@/components/layout/problem-page";
 
 export default function NotFound() {
-  return (
-    <ProblemPage title="Page not found">
-      There is nothing at this address, or it is not yours to see. Check the link, or start again from your home page.
-    </ProblemPage>
-  );
+  return <ProblemPage title={NOT_FOUND_TEXT.title}>{NOT_FOUND_TEXT.body}</ProblemPage>;
 }

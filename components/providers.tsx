@@ -1,6 +1,11 @@
 "use client";
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { useState, type ReactNode } from "react";
+import { z } from "zod";
+
+// zod would otherwise probe for eval() (to compile faster parsers), which the Content-Security-Policy rightly refuses
+// and reports as a violation on every page with a form.
+z.config({ jitless: true });
 
 export function Providers({ children }: { children: ReactNode }) {
   const [client] = useState(

@@ -46,7 +46,7 @@ vitest_project() {
 
 check database npm run -s db:migrate -- --recreate
 check seed npm run -s db:seed
-check typecheck npx tsc --noEmit
+check typecheck npx tsc --noEmit -p tsconfig.check.json
 check lint npx eslint --max-warnings 0 .
 vitest_project unit
 vitest_project integration

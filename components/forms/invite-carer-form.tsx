@@ -35,7 +35,7 @@ export function InviteCarerForm({ clientId, clientName, asTherapist }: { clientI
     ? `${clientName} has agreed that this person may see their programme and records and act for them.`
     : "I agree that this person may see my programme and records, log sessions and message my therapist for me.";
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
+    <form method="post" onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
       {sentTo ? (
         <Notice tone="ok" word="Invitation sent" role="status">
           An e-mail with a link is on its way to {sentTo}.
@@ -65,6 +65,8 @@ export function InviteCarerForm({ clientId, clientName, asTherapist }: { clientI
           {errors.consentMethod?.message ? <FieldError id="consent-method-error" message={errors.consentMethod.message} /> : null}
           <TextField label="Note (optional)" hint="When and how, if useful later." {...form.register("consentNote")} error={errors.consentNote?.message} />
         </fieldset>
+      ) : errors.consentMethod?.message ? (
+        <FieldError id="consent-method-error" message={errors.consentMethod.message} />
       ) : null}
       <div className="flex flex-col gap-1">
         <label className="flex items-start gap-3">

@@ -35,7 +35,7 @@ export const inviteCarerSchema = z.object({
   // A client's own request is in-app consent; a therapist records how the client gave it.
   consentMethod: z.enum(["in-app", "verbal", "written"], { error: "Choose how the client gave consent." }),
   consentNote: z.string().trim().max(500, "Keep the note under 500 characters.").optional(),
-  consentConfirmed: z.literal(true, { error: "Confirm that the client agrees to this carer." }),
+  consentConfirmed: z.literal(true, { error: "Tick the box to confirm consent to this carer." }),
 });
 export type InviteCarerInput = z.input<typeof inviteCarerSchema>;
 

@@ -82,7 +82,7 @@ describe("who may invite whom", () => {
       inviteCarer(alice, alice.clientId!, { carerName: "No Consent", carerEmail: email, relationship: "Friend", consentMethod: "in-app", consentConfirmed: false as unknown as true }),
       "VALIDATION",
     );
-    expect(error.fields?.consentConfirmed).toMatch(/Confirm/);
+    expect(error.fields?.consentConfirmed).toMatch(/confirm consent/);
     expect(await db().select().from(invitation).where(eq(invitation.email, email))).toHaveLength(0);
   });
 });

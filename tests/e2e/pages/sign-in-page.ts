@@ -1,5 +1,6 @@
 import { expect } from "vitest";
 import type { Page } from "playwright-core";
+import { whenInteractive } from "../support/hydration";
 
 // Page object for /sign-in, found by label and role as a person using a screen reader would.
 export class SignInPage {
@@ -10,6 +11,7 @@ export class SignInPage {
   }
 
   async signIn(email: string, password: string) {
+    await whenInteractive(this.page.getByRole("button", { name: "Sign in" }));
     await this.page.getByLabel("E-mail address").fill(email);
     await this.page.getByLabel("Password").fill(password);
     await this.page.getByRole("button", { name: "Sign in" }).click();

@@ -28,7 +28,7 @@ export function ForgotPasswordForm() {
     );
   }
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
+    <form method="post" onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
       <FormAlert message={formError} />
       <TextField label="E-mail address" type="email" autoComplete="email" {...form.register("email")} error={form.formState.errors.email?.message} />
       <Button type="submit" large busy={busy}>

@@ -29,7 +29,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
   });
   const { errors } = form.formState;
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
+    <form method="post" onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
       <FormAlert message={formError} />
       <TextField
         label="New password"

@@ -33,7 +33,7 @@ export function SignInForm({ passwordWasReset }: { passwordWasReset: boolean }) 
   });
   const { errors } = form.formState;
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
+    <form method="post" onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
       {passwordWasReset ? (
         <Notice tone="ok" word="Password changed" role="status">
           Sign in with your new password.

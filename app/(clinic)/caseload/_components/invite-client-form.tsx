@@ -24,7 +24,7 @@ export function InviteClientForm() {
   });
   const { errors } = form.formState;
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
+    <form method="post" onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
       {sentTo ? (
         <Notice tone="ok" word="Invitation sent" role="status">
           The client record is created and an e-mail with a link is on its way to {sentTo}.

@@ -20,7 +20,7 @@ export function AcceptInvitationForm({ invitationId, suggestedName }: { invitati
   });
   const { errors } = form.formState;
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
+    <form method="post" onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
       <FormAlert message={formError} />
       <TextField label="Your name" autoComplete="name" {...form.register("name")} error={errors.name?.message} />
       <TextField
