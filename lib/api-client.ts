@@ -7,6 +7,7 @@ export class ApiError extends Error {
     readonly code: ErrorCode | "NETWORK",
     message: string,
     readonly fields?: FieldErrors,
+    readonly reasons?: string[],
   ) {
     super(message);
   }
@@ -25,11 +26,11 @@ export async function sendJson<T = unknown>(method: "POST" | "PATCH" | "PUT" | "
     throw new ApiError(0, "NETWORK", "Rampline could not be reached. Check your connection and try again.");
   }
   const payload = (await response.json().catch(() => null)) as
-    | (T & { error?: { code: ErrorCode; message: string; fields?: FieldErrors } })
+    | (T & { error?: { code: ErrorCode; message: string; fields?: FieldErrors; reasons?: string[] } })
     | null;
   if (!response.ok) {
     const error = payload?.error;
-    throw new ApiError(response.status, error?.code ?? "INTERNAL", error?.message ?? "Something went wrong. Please try again.", error?.fields);
+    throw new ApiError(response.status, error?.code ?? "INTERNAL", error?.message ?? "Something went wrong. Please try again.", error?.fields, error?.reasons);
   }
   return payload as T;
 }

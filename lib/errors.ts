@@ -8,6 +8,8 @@ export const ERROR_STATUS = {
   CONFLICT: 409,
   GONE: 410,
   PAYLOAD_TOO_LARGE: 413,
+  // The request is well formed but the record is not ready for it (e.g. publishing with a blocking finding).
+  BLOCKED: 422,
   UNSUPPORTED_MEDIA_TYPE: 415,
   RATE_LIMITED: 429,
   INTERNAL: 500,
@@ -19,12 +21,15 @@ export type FieldErrors = Record<string, string>;
 export class AppError extends Error {
   readonly code: ErrorCode;
   readonly fields?: FieldErrors;
+  /** Every reason, when there can be several (e.g. what stops a programme being published). */
+  readonly reasons?: string[];
 
-  constructor(code: ErrorCode, message: string, fields?: FieldErrors) {
+  constructor(code: ErrorCode, message: string, fields?: FieldErrors, reasons?: string[]) {
     super(message);
     this.name = "AppError";
     this.code = code;
     this.fields = fields;
+    this.reasons = reasons;
   }
 
   get status(): number {
@@ -37,8 +42,15 @@ export const forbidden = () => new AppError("FORBIDDEN", "Your role does not all
 // Records outside someone's reach are reported as missing, so their existence is not revealed.
 export const notFound = (what = "That record") => new AppError("NOT_FOUND", `${what} was not found.`);
 
-export type ErrorBody = { error: { code: ErrorCode; message: string; fields?: FieldErrors } };
+export type ErrorBody = { error: { code: ErrorCode; message: string; fields?: FieldErrors; reasons?: string[] } };
 
 export function errorBody(error: AppError): ErrorBody {
-  return { error: { code: error.code, message: error.message, ...(error.fields ? { fields: error.fields } : {}) } };
+  return {
+    error: {
+      code: error.code,
+      message: error.message,
+      ...(error.fields ? { fields: error.fields } : {}),
+      ...(error.reasons ? { reasons: error.reasons } : {}),
+    },
+  };
 }

@@ -1,11 +1,23 @@
 // Seeds the invented demo clinic. Safe to run again: it adds only what is missing.
 import { db, pool } from "../db/client";
 import { seedDemo } from "../db/seed/seed-demo";
+import { seedDemoProgrammes } from "../db/seed/seed-programmes";
+import { stopBoss } from "../lib/jobs/boss";
 
-seedDemo(db())
-  .then(({ created }) => console.log(created ? `[seed] added ${created} demo rows` : "[seed] demo data already present"))
+async function main() {
+  const { created } = await seedDemo(db());
+  const programmes = await seedDemoProgrammes(db());
+  return created + programmes;
+}
+
+main()
+  .then((created) => console.log(created ? `[seed] added ${created} demo records` : "[seed] demo data already present"))
   .catch((error) => {
     console.error("[seed] failed:", error);
     process.exitCode = 1;
   })
-  .finally(() => pool().end());
+  // Publishing queues "there is an update" e-mails, which starts the job queue: stop it so the script can end.
+  .finally(async () => {
+    await stopBoss();
+    await pool().end();
+  });

@@ -7,7 +7,10 @@ export default async function ClinicLayout({ children }: { children: ReactNode }
   const actor = await requirePageActor("admin", "therapist");
   const nav: NavItem[] =
     actor.role === "admin"
-      ? [{ href: "/team", label: "Team" }]
+      ? [
+          { href: "/team", label: "Team" },
+          { href: "/audit", label: "Audit trail" },
+        ]
       : [{ href: "/caseload", label: "Caseload" }];
   nav.push({ href: "/explore", label: "Settings explorer" });
   return (

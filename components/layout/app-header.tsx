@@ -8,7 +8,7 @@ export type NavItem = { href: string; label: string };
 
 export function AppHeader({ actor, nav }: { actor: Actor; nav: NavItem[] }) {
   return (
-    <header className="border-b border-line bg-card">
+    <header className="border-b border-line bg-card print:hidden">
       <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-4 px-5 py-3">
         <div className="flex flex-wrap items-center gap-6">
           <Wordmark href="/home" />

@@ -1,5 +1,5 @@
 import type { UseFormRegisterReturn } from "react-hook-form";
-import type { ChannelSettingsFormValues } from "./values";
+import type { ChannelSettingsFormValues } from "@/lib/forms/channel-settings-values";
 
 /**
  * What every group of channel-settings fields receives. `register` takes the field's path inside the settings

@@ -1,6 +1,7 @@
 import type { ReactElement } from "react";
 import { InvitationEmail, invitationSubject } from "@/emails/invitation-email";
 import { PasswordResetEmail, passwordResetSubject } from "@/emails/password-reset-email";
+import { ProgrammeUpdatedEmail, programmeUpdatedSubject } from "@/emails/programme-updated-email";
 import type { EmailMessage } from "./messages";
 
 export function composeEmail(message: EmailMessage): { subject: string; element: ReactElement } {
@@ -9,5 +10,7 @@ export function composeEmail(message: EmailMessage): { subject: string; element:
       return { subject: invitationSubject(message.data), element: <InvitationEmail {...message.data} /> };
     case "password-reset":
       return { subject: passwordResetSubject(), element: <PasswordResetEmail {...message.data} /> };
+    case "programme-updated":
+      return { subject: programmeUpdatedSubject(), element: <ProgrammeUpdatedEmail {...message.data} /> };
   }
 }

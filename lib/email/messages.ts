@@ -8,6 +8,7 @@ export type EmailMessage =
       to: string;
       data: { inviteeName: string; clinicName: string; inviterName: string; role: Role; url: string };
     }
-  | { template: "password-reset"; to: string; data: { name: string; url: string } };
+  | { template: "password-reset"; to: string; data: { name: string; url: string } }
+  | { template: "programme-updated"; to: string; data: { name: string; clinicName: string; url: string } };
 
 export type EmailTemplateName = EmailMessage["template"];

@@ -1,15 +1,10 @@
 import { z } from "zod";
 import { channelSettingsSchema } from "@/lib/stim";
+import { ELECTRODE_TYPE_IDS } from "./labels";
 
 // The published programme, strictly typed. A version's content never changes once written, so everything the
 // client was shown (standard cautions included) is stored in it.
 
-export const ELECTRODE_TYPES = ["standard-gel", "sensitive-skin-gel", "reusable-carbon"] as const;
-export const ELECTRODE_TYPE_LABELS: Record<(typeof ELECTRODE_TYPES)[number], string> = {
-  "standard-gel": "Self-adhesive, standard gel",
-  "sensitive-skin-gel": "Self-adhesive, thicker gel for sensitive skin",
-  "reusable-carbon": "Carbon rubber with gel or sponge",
-};
 
 export const markerSchema = z.object({
   view: z.enum(["front", "back"]),
@@ -34,7 +29,7 @@ export const programmeChannelSchema = z.object({
   id: z.string().min(1).max(40),
   target: z.string({ error: "Name the target muscle or movement." }).trim().min(2, "Name the target muscle or movement.").max(120, "Keep it under 120 characters."),
   side: z.enum(["left", "right"], { error: "Choose the side: left or right." }),
-  electrodeType: z.enum(ELECTRODE_TYPES, { error: "Choose the electrode type." }),
+  electrodeType: z.enum(ELECTRODE_TYPE_IDS, { error: "Choose the electrode type." }),
   markers: z.tuple([markerSchema, markerSchema], { error: "Place both electrodes on the body outline." }),
   placementNote: z.string().trim().max(300, "Keep the placement note under 300 characters.").optional(),
   photoIds: z.array(z.string().min(1)).max(4, "Add at most 4 placement photos per channel."),

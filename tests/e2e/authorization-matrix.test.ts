@@ -1,7 +1,7 @@
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
-import { member } from "@/db/schema";
+import { member, photo, screening } from "@/db/schema";
 import { createClinic, createPerson, TEST_PASSWORD } from "../support/factories";
 import { demo } from "./support/demo-accounts";
 import { httpRequest, httpSignIn } from "./support/http";
@@ -14,7 +14,7 @@ type Outcome = "ok" | "in" | 401 | 403 | 404;
 const WHO: Who[] = ["anonymous", "client", "carer", "therapist", "otherTherapist", "admin", "otherAdmin"];
 
 const cookies = {} as Record<Who, string | undefined>;
-const ids = { arthur: "demo-client-arthur", brenda: "demo-client-brenda", foreign: "", priyaMember: "" };
+const ids = { arthur: "demo-client-arthur", brenda: "demo-client-brenda", foreign: "", priyaMember: "", arthurPhoto: "", arthurScreening: "" };
 let foreignClientName = "";
 
 beforeAll(async () => {
@@ -27,6 +27,10 @@ beforeAll(async () => {
   foreignClientName = foreign.name;
   const [priya] = await db().select().from(member).where(eq(member.userId, "demo-priya"));
   ids.priyaMember = priya!.id;
+  const [arthurPhoto] = await db().select().from(photo).where(eq(photo.clientId, ids.arthur));
+  ids.arthurPhoto = arthurPhoto!.id;
+  const [arthurScreening] = await db().select().from(screening).where(eq(screening.clientId, ids.arthur));
+  ids.arthurScreening = arthurScreening!.id;
   cookies.client = await httpSignIn(demo.client.email, demo.password);
   cookies.carer = await httpSignIn(demo.carer.email, demo.password);
   cookies.therapist = await httpSignIn(demo.therapist.email, demo.password);
@@ -35,9 +39,14 @@ beforeAll(async () => {
   cookies.otherAdmin = await httpSignIn(otherAdmin.email, TEST_PASSWORD);
 });
 
-type Row = { method: string; label?: string; path: () => string; body?: unknown; expect: Record<Who, Outcome>; secret?: () => string };
+// `okStatus` is what an allowed request answers: 400 for writes sent an invalid body, 200 for reads, 415 for the
+// photo upload sent JSON instead of a file.
+type Row = { method: string; label?: string; path: () => string; body?: unknown; okStatus?: number; expect: Record<Who, Outcome>; secret?: () => string };
 
 const staffOnly = { anonymous: "in", client: 403, carer: 403 } as const;
+const arthurStaff = { therapist: "ok", otherTherapist: 404, admin: "ok", otherAdmin: 404 } as const;
+const arthurCircle = { anonymous: 401, client: "ok", carer: "ok", ...arthurStaff } as const;
+const arthurTherapistWrites = { anonymous: 401, client: 403, carer: 403, therapist: "ok", otherTherapist: 404, admin: 403, otherAdmin: 403 } as const;
 const rows: Row[] = [
   { method: "GET", path: () => "/", expect: { anonymous: "ok", client: "ok", carer: "ok", therapist: "ok", otherTherapist: "ok", admin: "ok", otherAdmin: "ok" } },
   { method: "GET", path: () => "/home", expect: { anonymous: "in", client: "ok", carer: "ok", therapist: "ok", otherTherapist: "ok", admin: "ok", otherAdmin: "ok" } },
@@ -91,6 +100,32 @@ const rows: Row[] = [
     body: {},
     expect: { anonymous: 401, client: 404, carer: 403, therapist: "ok", otherTherapist: 404, admin: 403, otherAdmin: 403 },
   },
+  ...["programme", "programme/versions", "handout", "screening"].map(
+    (page): Row => ({ method: "GET", label: `/clients/<own clinic's client>/${page}`, path: () => `/clients/${ids.arthur}/${page}`, secret: () => demo.client.name, expect: { ...staffOnly, ...arthurStaff } }),
+  ),
+  { method: "GET", label: "/clients/<own clinic's client>/screening/new", path: () => `/clients/${ids.arthur}/screening/new`, secret: () => demo.client.name, expect: { ...staffOnly, therapist: "ok", otherTherapist: 404, admin: 403, otherAdmin: 404 } },
+  ...["/programme", "/programme/handout"].map(
+    (path): Row => ({ method: "GET", path: () => path, expect: { anonymous: "in", client: "ok", carer: "ok", therapist: 403, otherTherapist: 403, admin: 403, otherAdmin: 403 } }),
+  ),
+  { method: "GET", path: () => "/audit", expect: { ...staffOnly, therapist: 403, otherTherapist: 403, admin: "ok", otherAdmin: "ok" } },
+  { method: "PATCH", label: "/api/clients/<own clinic's client>", path: () => `/api/clients/${ids.arthur}`, body: { affectedSide: "upwards" }, expect: arthurTherapistWrites },
+  { method: "POST", label: "/api/clients/<own clinic's client>/consents", path: () => `/api/clients/${ids.arthur}/consents`, body: {}, expect: { ...arthurTherapistWrites, client: "ok" } },
+  { method: "GET", label: "/api/clients/<own clinic's client>/screenings", path: () => `/api/clients/${ids.arthur}/screenings`, okStatus: 200, expect: { anonymous: 401, client: 403, carer: 403, ...arthurStaff } },
+  { method: "POST", label: "/api/clients/<own clinic's client>/screenings", path: () => `/api/clients/${ids.arthur}/screenings`, body: {}, expect: arthurTherapistWrites },
+  {
+    method: "POST",
+    label: "/api/clients/<own clinic's client>/screenings/<id>/clearances",
+    path: () => `/api/clients/${ids.arthur}/screenings/${ids.arthurScreening}/clearances`,
+    body: {},
+    expect: arthurTherapistWrites,
+  },
+  { method: "PUT", label: "/api/clients/<own clinic's client>/programme/draft", path: () => `/api/clients/${ids.arthur}/programme/draft`, body: {}, expect: arthurTherapistWrites },
+  { method: "POST", label: "/api/clients/<own clinic's client>/programme/versions", path: () => `/api/clients/${ids.arthur}/programme/versions`, body: {}, expect: arthurTherapistWrites },
+  { method: "POST", label: "/api/clients/<own clinic's client>/photos", path: () => `/api/clients/${ids.arthur}/photos`, body: {}, okStatus: 415, expect: arthurCircle },
+  // A photo is either served or "not found", whoever asks: even the signed-out get a 404 rather than a 401.
+  { method: "GET", label: "/api/photos/<own clinic's client's photo>", path: () => `/api/photos/${ids.arthurPhoto}`, okStatus: 200, expect: { ...arthurCircle, anonymous: 404 } },
+  { method: "GET", label: "/api/clients/<own clinic's client>/programme/handout", path: () => `/api/clients/${ids.arthur}/programme/handout`, okStatus: 200, expect: arthurCircle },
+  { method: "GET", label: "/api/clients/<another client of the clinic>/programme/handout", path: () => `/api/clients/${ids.brenda}/programme/handout`, okStatus: 404, expect: { ...arthurCircle, client: 404, carer: 404, therapist: "ok", admin: "ok" } },
   // better-auth endpoints Rampline does not use are not reachable at all, whoever asks.
   ...["/api/auth/sign-up/email", "/api/auth/organization/invite-member", "/api/auth/organization/create", "/api/auth/admin/ban-user", "/api/auth/admin/set-role"].map(
     (path): Row => ({ method: "POST", path: () => path, body: {}, expect: Object.fromEntries(WHO.map((who) => [who, 404])) as Record<Who, Outcome> }),
@@ -108,13 +143,14 @@ describe("authorisation matrix", () => {
           expect(result.location).toMatch(/\/sign-in(\?|$)/);
         } else if (expected === "ok") {
           const isApi = row.path().startsWith("/api/");
-          if (isApi) expect(result.status).toBe(400);
+          if (isApi) expect(result.status).toBe(row.okStatus ?? 400);
           else expect([200, 307]).toContain(result.status);
           if (!isApi && result.status === 307) expect(result.location).not.toMatch(/sign-in/);
         } else {
           expect(result.status).toBe(expected);
           if (row.path().startsWith("/api/")) {
             const body = JSON.parse(result.text) as { error: Record<string, unknown> };
+            // A refusal is the error alone: no fields, no reasons, nothing about the record.
             expect(Object.keys(body)).toEqual(["error"]);
             expect(Object.keys(body.error).sort()).toEqual(["code", "message"]);
           }

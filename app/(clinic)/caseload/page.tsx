@@ -1,15 +1,15 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { Card, EmptyState } from "@/components/ui/card";
-import { listCaseloadByTherapistId } from "@/db/queries/clients";
+import { listCaseloadRowsByTherapistId } from "@/db/queries/clients";
 import { requirePageActor } from "@/lib/auth/page-guards";
+import { CaseloadTable } from "./_components/caseload-table";
 import { InviteClientForm } from "./_components/invite-client-form";
 
 export const metadata: Metadata = { title: "Caseload" };
 
 export default async function CaseloadPage() {
   const actor = await requirePageActor("therapist");
-  const clients = await listCaseloadByTherapistId(actor.organizationId, actor.userId);
+  const clients = await listCaseloadRowsByTherapistId(actor.organizationId, actor.userId);
   return (
     <div className="flex flex-col gap-6">
       <div>
@@ -23,28 +23,7 @@ export default async function CaseloadPage() {
             write their programme straight away.
           </EmptyState>
         ) : (
-          <table className="w-full text-left">
-            <caption className="sr-only">Your clients</caption>
-            <thead>
-              <tr className="border-b border-line">
-                <th scope="col" className="py-2">Client</th>
-                <th scope="col" className="py-2">Account</th>
-              </tr>
-            </thead>
-            <tbody>
-              {clients.map((record) => (
-                <tr key={record.id} className="border-b border-line-soft">
-                  <td className="py-2">
-                    <Link href={`/clients/${record.id}`} className="font-bold">
-                      {record.fullName}
-                    </Link>
-                    <span className="block text-sm text-ink-soft">{record.email}</span>
-                  </td>
-                  <td className="py-2">{record.userId ? "Active" : "Invitation sent"}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
+          <CaseloadTable rows={clients} />
         )}
       </Card>
       <Card title="Invite a client">

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { EXAMPLE_VALUES, toChannelInput, toNumber, unplacedErrors, type SettingsFormValues } from "@/components/stim-settings/values";
+import { EXAMPLE_VALUES, toChannelInput, toNumber, unplacedErrors, type SettingsFormValues } from "@/lib/forms/channel-settings-values";
 import { analyseChannel } from "@/lib/stim";
 
 const withValues = (patch: Partial<SettingsFormValues>): SettingsFormValues => ({ ...EXAMPLE_VALUES, ...patch });

@@ -9,7 +9,7 @@ import { ContextFields } from "@/components/stim-settings/context-fields";
 import { CycleFields, SessionFields } from "@/components/stim-settings/cycle-fields";
 import { ElectrodeFields } from "@/components/stim-settings/electrode-fields";
 import { PulseFields } from "@/components/stim-settings/pulse-fields";
-import { EXAMPLE_VALUES, toChannelInput, unplacedErrors, type SettingsFormValues } from "@/components/stim-settings/values";
+import { EXAMPLE_VALUES, toChannelInput, unplacedErrors, type SettingsFormValues } from "@/lib/forms/channel-settings-values";
 
 // The form and the picture side by side. Nothing is submitted: every change is analysed in the browser by the
 // same pure function the server uses, and the analysis's own field messages are shown on the fields.
@@ -43,7 +43,7 @@ export function ExploreWorkbench() {
             </ul>
           </Notice>
         ) : null}
-        <form noValidate onSubmit={(event) => event.preventDefault()} className="flex flex-col gap-8" aria-label="Channel settings">
+        <form method="post" noValidate onSubmit={(event) => event.preventDefault()} className="flex flex-col gap-8" aria-label="Channel settings">
           <PulseFields {...groups} />
           <CycleFields {...groups} />
           <SessionFields {...groups} />
