@@ -177,7 +177,7 @@ describe("joining a clinic by invitation", () => {
   it("shows the therapist the carer, their account and the consent on the client's page", async () => {
     const caseload = new CaseloadPage(therapistPage);
     await caseload.open();
-    expect(await caseload.clientRow(client.email).textContent()).toContain("Active");
+    expect(await caseload.clientRow(client.email).textContent()).toMatch(/account active/i);
     const clientRecord = new ClientPage(therapistPage);
     await clientRecord.open(await caseload.clientPagePath(client.name));
     expect(await clientRecord.heading().textContent()).toBe(client.name);

@@ -28,7 +28,9 @@ const columns: ColumnDef<CaseloadRow>[] = [
         <Link href={`/clients/${row.original.id}`} className="font-bold">
           {row.original.fullName}
         </Link>
-        <span className="block text-sm text-ink-soft">{row.original.hasAccount ? row.original.email : `${row.original.email} · invitation sent`}</span>
+        <span className="block text-sm text-ink-soft">
+          {row.original.email} · {row.original.hasAccount ? "Account active" : "Invitation sent"}
+        </span>
       </>
     ),
   },
