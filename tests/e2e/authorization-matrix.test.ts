@@ -126,6 +126,7 @@ const rows: Row[] = [
   { method: "GET", label: "/api/photos/<own clinic's client's photo>", path: () => `/api/photos/${ids.arthurPhoto}`, okStatus: 200, expect: { ...arthurCircle, anonymous: 404 } },
   { method: "GET", label: "/api/clients/<own clinic's client>/programme/handout", path: () => `/api/clients/${ids.arthur}/programme/handout`, okStatus: 200, expect: arthurCircle },
   { method: "GET", label: "/api/clients/<another client of the clinic>/programme/handout", path: () => `/api/clients/${ids.brenda}/programme/handout`, okStatus: 404, expect: { ...arthurCircle, client: 404, carer: 404, therapist: "ok", admin: "ok" } },
+  { method: "POST", path: () => "/api/programme-templates", body: {}, expect: { anonymous: 401, client: 403, carer: 403, therapist: "ok", otherTherapist: "ok", admin: 403, otherAdmin: 403 } },
   // better-auth endpoints Rampline does not use are not reachable at all, whoever asks.
   ...["/api/auth/sign-up/email", "/api/auth/organization/invite-member", "/api/auth/organization/create", "/api/auth/admin/ban-user", "/api/auth/admin/set-role"].map(
     (path): Row => ({ method: "POST", path: () => path, body: {}, expect: Object.fromEntries(WHO.map((who) => [who, 404])) as Record<Who, Outcome> }),

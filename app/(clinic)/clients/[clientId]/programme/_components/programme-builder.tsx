@@ -9,6 +9,7 @@ import { emptyChannel, formValuesToContentInput, type ProgrammeFormValues } from
 import { fieldErrorsFrom } from "@/lib/validation";
 import { ChannelSection } from "./channel-section";
 import { PublishPanel } from "./publish-panel";
+import { SaveTemplate } from "./save-template";
 import { SaveStatus } from "./save-status";
 import { ScheduleSection } from "./schedule-section";
 import { StepList } from "./step-list";
@@ -79,6 +80,7 @@ export function ProgrammeBuilder({ clientId, initialValues, initialRevision, has
           </div>
           <StepList name="ownCautions" legend="Your own cautions for this client" control={form.control} register={form.register} addLabel="Add a caution" />
         </section>
+        <SaveTemplate />
         <PublishPanel clientId={clientId} autosave={autosave} reports={reports} contentErrors={contentErrors} screeningReasons={screeningReasons} />
       </form>
     </FormProvider>

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { buttonClasses } from "@/components/ui/button";
 import { Card, EmptyState } from "@/components/ui/card";
 import { VersionDiff } from "@/components/programme-view/version-diff";
 import { getProgrammeByClientId, listVersionsByProgrammeId } from "@/db/queries/programmes";
@@ -39,6 +40,27 @@ export default async function VersionsPage({ params, searchParams }: { params: P
               <p className="text-ink-soft">Choose two versions below to compare them.</p>
             )}
           </Card>
+          {versions.length > 1 ? (
+            <form method="get" className="flex flex-wrap items-end gap-3" aria-label="Compare two versions">
+              {(["from", "to"] as const).map((end) => (
+                <div key={end} className="flex flex-col gap-1">
+                  <label htmlFor={`compare-${end}`} className="font-bold">
+                    {end === "from" ? "Compare version" : "with version"}
+                  </label>
+                  <select id={`compare-${end}`} name={end} defaultValue={String(end === "from" ? from : to)} className="min-h-12 rounded-md border-2 border-line bg-white px-3">
+                    {versions.map(({ version }) => (
+                      <option key={version.id} value={version.number}>
+                        {version.number}
+                      </option>
+                    ))}
+                  </select>
+                </div>
+              ))}
+              <button type="submit" className={buttonClasses("secondary")}>
+                Compare
+              </button>
+            </form>
+          ) : null}
           <Card title="All versions">
             <table className="w-full text-left">
               <caption className="sr-only">Published versions, newest first</caption>
