@@ -388,6 +388,89 @@ export const photo = pgTable(
 export type Photo = typeof photo.$inferSelect;
 export type NewPhoto = typeof photo.$inferInsert;
 
+// One logged session, by the client or a carer on their behalf, measured against the programme version in force
+// (or the one the client says their device was set to). Per-channel amplitudes and per-electrode skin checks are
+// stored with it as JSON: they are always read and written together.
+export const SKIN_LEVELS = [1, 2, 3, 4, 5] as const;
+export const checkIn = pgTable(
+  "check_in",
+  {
+    id: id(),
+    clientId: text()
+      .notNull()
+      .references(() => client.id, { onDelete: "cascade" }),
+    programmeVersionId: text().references(() => programmeVersion.id, { onDelete: "set null" }),
+    loggedById: text()
+      .notNull()
+      .references(() => user.id),
+    loggedByRole: text({ enum: ["client", "carer"] }).notNull(),
+    sessionDate: date().notNull(),
+    minutes: integer().notNull(),
+    comfort: integer().notNull(),
+    movement: text({ enum: ["full", "partial", "none"] }).notNull(),
+    fatigue: text({ enum: ["none", "mild", "moderate", "severe"] }).notNull(),
+    channels: jsonb().$type<{ channelId: string; amplitudeMa: number }[]>().notNull(),
+    skin: jsonb().$type<{ channelId: string; electrode: "A" | "B"; level: number; spreads: boolean; itch: boolean; photoIds: string[] }[]>().notNull(),
+    electrodeCondition: text({ enum: ["fine", "edges-lifting", "poor-sticking"] }).notNull().default("fine"),
+    notes: text(),
+    createdAt: createdAt(),
+  },
+  (table) => [index("check_in_client_idx").on(table.clientId, table.sessionDate)],
+);
+export type CheckIn = typeof checkIn.$inferSelect;
+export type NewCheckIn = typeof checkIn.$inferInsert;
+
+// Something a therapist should look at, raised by a rule; kept after it is resolved, with the note that resolved it.
+export const flag = pgTable(
+  "flag",
+  {
+    id: id(),
+    organizationId: text()
+      .notNull()
+      .references(() => organization.id, { onDelete: "cascade" }),
+    clientId: text()
+      .notNull()
+      .references(() => client.id, { onDelete: "cascade" }),
+    checkInId: text().references(() => checkIn.id, { onDelete: "set null" }),
+    rule: text().notNull(),
+    severity: text({ enum: ["review", "urgent"] }).notNull(),
+    status: text({ enum: ["open", "acknowledged", "resolved"] }).notNull().default("open"),
+    title: text().notNull(),
+    detail: jsonb(),
+    acknowledgedById: text().references(() => user.id),
+    acknowledgedAt: timestamp({ withTimezone: true }),
+    resolvedById: text().references(() => user.id),
+    resolvedAt: timestamp({ withTimezone: true }),
+    resolutionNote: text(),
+    createdAt: createdAt(),
+  },
+  (table) => [
+    index("flag_organization_status_idx").on(table.organizationId, table.status, table.createdAt),
+    index("flag_client_idx").on(table.clientId),
+  ],
+);
+export type Flag = typeof flag.$inferSelect;
+export type NewFlag = typeof flag.$inferInsert;
+
+// A pack of electrodes the client opened; uses are counted from the check-ins logged since.
+export const electrodePack = pgTable(
+  "electrode_pack",
+  {
+    id: id(),
+    clientId: text()
+      .notNull()
+      .references(() => client.id, { onDelete: "cascade" }),
+    openedOn: date().notNull(),
+    recordedById: text()
+      .notNull()
+      .references(() => user.id),
+    note: text(),
+    createdAt: createdAt(),
+  },
+  (table) => [index("electrode_pack_client_idx").on(table.clientId, table.openedOn)],
+);
+export type ElectrodePack = typeof electrodePack.$inferSelect;
+
 // ---------------------------------------------------------------------------------------------------------------
 export const userRelations = relations(user, ({ many }) => ({
   sessions: many(session),

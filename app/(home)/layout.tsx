@@ -7,7 +7,7 @@ export default async function HomeLayout({ children }: { children: ReactNode }) 
   const actor = await requirePageActor("client", "carer");
   return (
     <>
-      <AppHeader actor={actor} nav={[{ href: "/today", label: "Today" }, { href: "/programme", label: "Programme" }]} />
+      <AppHeader actor={actor} nav={[{ href: "/today", label: "Today" }, { href: "/programme", label: "Programme" }, { href: "/history", label: "History" }]} />
       <main id="main" className="mx-auto max-w-2xl px-4 py-6 text-lg">
         {children}
       </main>

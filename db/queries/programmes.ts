@@ -74,3 +74,19 @@ export async function insertProgrammeTemplate(values: typeof programmeTemplate.$
   const [row] = await db().insert(programmeTemplate).values(values).returning();
   return row!;
 }
+
+export async function getProgrammeVersionById(versionId: string) {
+  const [row] = await db().select().from(programmeVersion).where(eq(programmeVersion.id, versionId)).limit(1);
+  return row ?? null;
+}
+
+// Every client with at least one published version, with those versions, for the daily rules.
+export async function listPublishedSchedules() {
+  const rows = await db()
+    .select({ clientId: programme.clientId, number: programmeVersion.number, publishedAt: programmeVersion.publishedAt, content: programmeVersion.content })
+    .from(programmeVersion)
+    .innerJoin(programme, eq(programmeVersion.programmeId, programme.id));
+  const byClient = new Map<string, typeof rows>();
+  for (const row of rows) byClient.set(row.clientId, [...(byClient.get(row.clientId) ?? []), row]);
+  return byClient;
+}

@@ -28,3 +28,8 @@ export async function setUserBannedById(userId: string, banned: boolean, reason:
   // A deactivated person is signed out everywhere at once.
   if (banned) await executor.delete(session).where(eq(session.userId, userId));
 }
+
+export async function getUserById(userId: string, executor: Database = db()) {
+  const [row] = await executor.select().from(user).where(eq(user.id, userId)).limit(1);
+  return row ?? null;
+}

@@ -1,4 +1,5 @@
 import type { ReactElement } from "react";
+import { FlagRaisedEmail, flagRaisedSubject } from "@/emails/flag-raised-email";
 import { InvitationEmail, invitationSubject } from "@/emails/invitation-email";
 import { PasswordResetEmail, passwordResetSubject } from "@/emails/password-reset-email";
 import { ProgrammeUpdatedEmail, programmeUpdatedSubject } from "@/emails/programme-updated-email";
@@ -10,6 +11,8 @@ export function composeEmail(message: EmailMessage): { subject: string; element:
       return { subject: invitationSubject(message.data), element: <InvitationEmail {...message.data} /> };
     case "password-reset":
       return { subject: passwordResetSubject(), element: <PasswordResetEmail {...message.data} /> };
+    case "flag-raised":
+      return { subject: flagRaisedSubject(message.data.urgent), element: <FlagRaisedEmail {...message.data} /> };
     case "programme-updated":
       return { subject: programmeUpdatedSubject(), element: <ProgrammeUpdatedEmail {...message.data} /> };
   }

@@ -9,6 +9,7 @@ export type EmailMessage =
       data: { inviteeName: string; clinicName: string; inviterName: string; role: Role; url: string };
     }
   | { template: "password-reset"; to: string; data: { name: string; url: string } }
-  | { template: "programme-updated"; to: string; data: { name: string; clinicName: string; url: string } };
+  | { template: "programme-updated"; to: string; data: { name: string; clinicName: string; url: string } }
+  | { template: "flag-raised"; to: string; data: { name: string; urgent: boolean; url: string } };
 
 export type EmailTemplateName = EmailMessage["template"];

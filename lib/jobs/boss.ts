@@ -2,7 +2,7 @@ import PgBoss from "pg-boss";
 import { env } from "@/lib/env";
 
 // Queue names are the contract between whoever enqueues a job and the worker that runs it.
-export const QUEUES = { email: "email" } as const;
+export const QUEUES = { email: "email", dailyRules: "daily-rules" } as const;
 
 const globalForBoss = globalThis as unknown as { ramplineBoss?: Promise<PgBoss> };
 

@@ -1,6 +1,7 @@
 import { deliverEmail } from "@/lib/email/deliver";
 import type { EmailMessage } from "@/lib/email/messages";
 import { getBoss, QUEUES } from "./boss";
+import { runDailyRules } from "./daily-rules-job";
 
 // Starts the job handlers in this process. Every web instance may run them: pg-boss hands each job to one worker.
 export async function startWorkers(options: { pollingIntervalSeconds?: number } = {}): Promise<void> {
@@ -12,4 +13,9 @@ export async function startWorkers(options: { pollingIntervalSeconds?: number } 
       for (const job of jobs) await deliverEmail(job.id, job.data);
     },
   );
+  // Every morning, clinic time; pg-boss keeps one schedule however many instances ask for it.
+  await boss.schedule(QUEUES.dailyRules, "15 7 * * *", {}, { tz: "Europe/London" });
+  await boss.work(QUEUES.dailyRules, { pollingIntervalSeconds: 30 }, async () => {
+    await runDailyRules();
+  });
 }

@@ -50,6 +50,8 @@ export const scheduleSchema = z.object({
   daysPerWeek: wholeNumber("days per week", 1, 7),
   weeks: wholeNumber("number of weeks", 1, 52),
   reviewOn: z.string({ error: "Choose a review date." }).regex(/^\d{4}-\d{2}-\d{2}$/, "Choose a review date."),
+  // When the client is prompted to open a new pack of electrodes; absent in versions published before it existed.
+  replaceElectrodesAfterUses: wholeNumber("number of uses before new electrodes", 1, 100).optional(),
 });
 export type Schedule = z.infer<typeof scheduleSchema>;
 

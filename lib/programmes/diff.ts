@@ -83,6 +83,7 @@ export function diffProgrammes(
     ["Days per week", String(c.schedule.daysPerWeek)],
     ["Weeks", String(c.schedule.weeks)],
     ["Review date", c.schedule.reviewOn],
+    ["New electrodes after", c.schedule.replaceElectrodesAfterUses === undefined ? "not set" : `${c.schedule.replaceElectrodesAfterUses} uses`],
   ];
   compareFields("Schedule", schedule(before), schedule(after), changes);
   compareLists("Skin preparation", "Step", before.skinPreparation, after.skinPreparation, changes);

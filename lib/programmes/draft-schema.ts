@@ -47,7 +47,7 @@ export const programmeDraftSchema = z.object({
     )
     .min(1, "Keep at least one channel.")
     .max(4, "A programme has at most 4 channels."),
-  schedule: z.object({ minutesPerSession: textValue, sessionsPerDay: textValue, daysPerWeek: textValue, weeks: textValue, reviewOn: textValue }),
+  schedule: z.object({ minutesPerSession: textValue, sessionsPerDay: textValue, daysPerWeek: textValue, weeks: textValue, reviewOn: textValue, replaceElectrodesAfterUses: textValue.optional() }),
   skinPreparation: z.array(step).max(20),
   electrodeCare: z.array(step).max(20),
   ownCautions: z.array(step).max(20),

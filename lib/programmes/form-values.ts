@@ -27,7 +27,7 @@ export type StepValue = { text: string };
 
 export type ProgrammeFormValues = {
   channels: ChannelFormValues[];
-  schedule: { minutesPerSession: string; sessionsPerDay: string; daysPerWeek: string; weeks: string; reviewOn: string };
+  schedule: { minutesPerSession: string; sessionsPerDay: string; daysPerWeek: string; weeks: string; reviewOn: string; replaceElectrodesAfterUses?: string };
   skinPreparation: StepValue[];
   electrodeCare: StepValue[];
   ownCautions: StepValue[];
@@ -73,7 +73,8 @@ export function addWeeks(from: Date, weeks: number): string {
 export function emptyProgramme(today = new Date()): ProgrammeFormValues {
   return {
     channels: [emptyChannel()],
-    schedule: { minutesPerSession: "30", sessionsPerDay: "1", daysPerWeek: "5", weeks: "6", reviewOn: addWeeks(today, 2) },
+    // 20 uses before a new pack is a cautious default to adjust to the electrode maker's guidance (from memory, unverified).
+    schedule: { minutesPerSession: "30", sessionsPerDay: "1", daysPerWeek: "5", weeks: "6", reviewOn: addWeeks(today, 2), replaceElectrodesAfterUses: "20" },
     skinPreparation: DEFAULT_SKIN_PREPARATION.map((text) => ({ text })),
     electrodeCare: DEFAULT_ELECTRODE_CARE.map((text) => ({ text })),
     ownCautions: [],
@@ -128,6 +129,7 @@ export function contentToFormValues(content: ProgrammeContent): ProgrammeFormVal
       daysPerWeek: str(content.schedule.daysPerWeek),
       weeks: str(content.schedule.weeks),
       reviewOn: content.schedule.reviewOn,
+      replaceElectrodesAfterUses: str(content.schedule.replaceElectrodesAfterUses),
     },
     skinPreparation: content.skinPreparation.map((text) => ({ text })),
     electrodeCare: content.electrodeCare.map((text) => ({ text })),
@@ -156,6 +158,7 @@ export function formValuesToContentInput(values: ProgrammeFormValues): unknown {
       daysPerWeek: toNumber(values.schedule.daysPerWeek),
       weeks: toNumber(values.schedule.weeks),
       reviewOn: values.schedule.reviewOn || undefined,
+      replaceElectrodesAfterUses: toNumber(values.schedule.replaceElectrodesAfterUses),
     },
     skinPreparation: steps(values.skinPreparation),
     electrodeCare: steps(values.electrodeCare),

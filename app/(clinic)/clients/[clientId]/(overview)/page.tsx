@@ -5,6 +5,7 @@ import { ScreeningSummary } from "@/components/screening/screening-summary";
 import { Card } from "@/components/ui/card";
 import { listCarersByClientId } from "@/db/queries/carers";
 import { requirePageClientAccess } from "@/lib/auth/page-guards";
+import { CheckInsCard } from "./_components/check-ins-card";
 import { ClientDetailsForm } from "./_components/client-details-form";
 import { ConsentsCard } from "./_components/consents-card";
 import { ProgrammeCard } from "./_components/programme-card";
@@ -25,6 +26,7 @@ export default async function ClientPage({ params }: { params: Promise<{ clientI
         </p>
       </div>
       <ProgrammeCard clientId={client.id} clientName={client.fullName} />
+      <CheckInsCard clientId={client.id} />
       <div className="grid gap-6 lg:grid-cols-2">
         <ScreeningSummary clientId={client.id} />
         <ConsentsCard clientId={client.id} canRecord={isTherapist} />

@@ -15,7 +15,15 @@ export function ScheduleSection({ register, errors }: { register: UseFormRegiste
         <NumberField label="Days per week" {...register("schedule.daysPerWeek")} error={errors["schedule.daysPerWeek"]} />
         <NumberField label="Weeks" {...register("schedule.weeks")} error={errors["schedule.weeks"]} />
       </div>
-      <TextField label="Review date" type="date" className="sm:max-w-xs" {...register("schedule.reviewOn")} error={errors["schedule.reviewOn"]} />
+      <div className="grid gap-4 sm:grid-cols-2">
+        <TextField label="Review date" type="date" {...register("schedule.reviewOn")} error={errors["schedule.reviewOn"]} />
+        <NumberField
+          label="New electrodes after (uses)"
+          hint="The client is prompted to open a new pack after this many sessions. Follow the electrode maker's guidance."
+          {...register("schedule.replaceElectrodesAfterUses")}
+          error={errors["schedule.replaceElectrodesAfterUses"]}
+        />
+      </div>
     </fieldset>
   );
 }
