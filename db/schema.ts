@@ -471,6 +471,72 @@ export const electrodePack = pgTable(
 );
 export type ElectrodePack = typeof electrodePack.$inferSelect;
 
+// One thread per client: the clinic's staff, the client and their carers. System messages (a published change, a
+// confirmation) sit in the same thread so the conversation and the changes read as one story.
+export const message = pgTable(
+  "message",
+  {
+    id: id(),
+    clientId: text()
+      .notNull()
+      .references(() => client.id, { onDelete: "cascade" }),
+    authorId: text().references(() => user.id, { onDelete: "set null" }),
+    kind: text({ enum: ["message", "system"] }).notNull().default("message"),
+    body: text().notNull(),
+    photoIds: jsonb().$type<string[]>().notNull().default([]),
+    // What the message is about, when it is about something: a check-in, a flag or a programme version.
+    aboutType: text({ enum: ["check-in", "flag", "version"] }),
+    aboutId: text(),
+    createdAt: createdAt(),
+  },
+  (table) => [index("message_client_idx").on(table.clientId, table.createdAt)],
+);
+export type Message = typeof message.$inferSelect;
+export type NewMessage = typeof message.$inferInsert;
+
+// How far each person has read each thread; unread is everything after it written by someone else.
+export const threadRead = pgTable(
+  "thread_read",
+  {
+    clientId: text()
+      .notNull()
+      .references(() => client.id, { onDelete: "cascade" }),
+    userId: text()
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    lastReadAt: timestamp({ withTimezone: true }).notNull(),
+    lastNotifiedAt: timestamp({ withTimezone: true }),
+  },
+  (table) => [uniqueIndex("thread_read_client_user_idx").on(table.clientId, table.userId)],
+);
+
+// Each person's choice of e-mails; no row means the defaults (all on).
+export const notificationSetting = pgTable("notification_setting", {
+  userId: text()
+    .primaryKey()
+    .references(() => user.id, { onDelete: "cascade" }),
+  emailMessages: boolean().notNull().default(true),
+  emailProgrammeUpdates: boolean().notNull().default(true),
+  emailFlags: boolean().notNull().default(true),
+  updatedAt: updatedAt(),
+});
+
+// The client (or a carer) saying their stimulator now matches a published version.
+export const versionConfirmation = pgTable(
+  "version_confirmation",
+  {
+    id: id(),
+    programmeVersionId: text()
+      .notNull()
+      .references(() => programmeVersion.id, { onDelete: "cascade" }),
+    confirmedById: text()
+      .notNull()
+      .references(() => user.id),
+    confirmedAt: createdAt(),
+  },
+  (table) => [uniqueIndex("version_confirmation_idx").on(table.programmeVersionId, table.confirmedById)],
+);
+
 // ---------------------------------------------------------------------------------------------------------------
 export const userRelations = relations(user, ({ many }) => ({
   sessions: many(session),

@@ -17,6 +17,8 @@ const envSchema = z.object({
   MAIL_RETRY_LIMIT: z.coerce.number().int().min(0).max(100).default(12),
   MAIL_RETRY_DELAY_SECONDS: z.coerce.number().int().min(1).max(3600).default(30),
   RUN_JOBS: booleanish.default(true),
+  // A burst of messages to one person becomes one e-mail sent this long after the first unread one.
+  MESSAGE_QUIET_SECONDS: z.coerce.number().int().min(1).max(86_400).default(300),
   SIGN_IN_RATE_LIMIT_MAX: z.coerce.number().int().min(1).max(10_000).default(5),
   SIGN_IN_RATE_LIMIT_WINDOW_SECONDS: z.coerce.number().int().min(1).max(86_400).default(60),
   SECURE_COOKIES: booleanish.optional(),

@@ -7,7 +7,7 @@ import { migrate } from "drizzle-orm/node-postgres/migrator";
 import { Client } from "pg";
 import PgBoss from "pg-boss";
 import { env } from "../lib/env";
-import { QUEUES } from "../lib/jobs/boss";
+import { QUEUE_POLICIES, QUEUES } from "../lib/jobs/boss";
 
 async function ensureDatabase(url: string, recreate: boolean) {
   const target = new URL(url);
@@ -44,7 +44,7 @@ async function main() {
 
   const boss = new PgBoss({ connectionString: url, max: 2 });
   await boss.start();
-  for (const name of Object.values(QUEUES)) await boss.createQueue(name);
+  for (const name of Object.values(QUEUES)) await boss.createQueue(name, { name, ...(QUEUE_POLICIES[name] ? { policy: QUEUE_POLICIES[name] } : {}) });
   await boss.stop({ graceful: false, wait: true });
   console.log("[migrate] database is up to date");
 }

@@ -1,13 +1,15 @@
 // Seeds the invented demo clinic. Safe to run again: it adds only what is missing.
 import { db, pool } from "../db/client";
 import { seedDemo } from "../db/seed/seed-demo";
+import { seedDemoCheckIns } from "../db/seed/seed-check-ins";
 import { seedDemoProgrammes } from "../db/seed/seed-programmes";
 import { stopBoss } from "../lib/jobs/boss";
 
 async function main() {
   const { created } = await seedDemo(db());
   const programmes = await seedDemoProgrammes(db());
-  return created + programmes;
+  const checkIns = await seedDemoCheckIns(db());
+  return created + programmes + checkIns;
 }
 
 main()

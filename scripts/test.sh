@@ -10,7 +10,7 @@ set -e
 CHILD_PIDS=()
 cleanup() {
   trap - INT TERM EXIT
-  for pid in "${CHILD_PIDS[@]}"; do kill "$pid" 2>/dev/null || true; done
+  for pid in "${CHILD_PIDS[@]}"; do kill_tree "$pid"; done
   for pid in "${CHILD_PIDS[@]}"; do wait "$pid" 2>/dev/null || true; done
   stop_cluster_if_started_here
 }

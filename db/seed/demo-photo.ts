@@ -15,3 +15,13 @@ export async function demoPlacementIllustration(): Promise<Buffer> {
   </svg>`;
   return sharp(Buffer.from(svg)).jpeg({ quality: 90 }).toBuffer();
 }
+
+// A drawn illustration standing in for a photo of skin redness under an electrode's outline.
+export async function demoRednessIllustration(): Promise<Buffer> {
+  const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="1000" height="750" viewBox="0 0 1000 750">
+    <rect width="1000" height="750" fill="#d9b595"/>
+    <rect x="330" y="230" width="340" height="290" rx="140" fill="#d98e7a" stroke="#b96a5a" stroke-width="6" stroke-dasharray="18 12"/>
+    <text x="40" y="70" font-family="sans-serif" font-size="40" fill="#1b2633">Illustration: redness within an electrode outline</text>
+  </svg>`;
+  return sharp(Buffer.from(svg)).jpeg({ quality: 90 }).toBuffer();
+}

@@ -17,7 +17,7 @@ import { demoClinic, demoClients, demoTherapists } from "./demo-clinic";
 import { demoPlacementIllustration } from "./demo-photo";
 import { demoScreeningAnswers } from "./demo-screening-answers";
 
-// Demo consents, screenings and programmes, made through Rampline's own commands so they pass the same checks as
+// Demo consents, screenings and programmes (Callum's second version comes with his check-ins, in reply to one), made through Rampline's own commands so they pass the same checks as
 // real ones. Each step runs only if its result is missing, so a second run adds nothing.
 
 const CONTACT = { phone: "0161 496 0732", email: "neuro-team@larkmoor.example", address: "Larkmoor Health Centre, 2 Weir Lane, Larkmoor" };
@@ -98,12 +98,6 @@ export async function seedDemoProgrammes(database: Database): Promise<number> {
         v.channels.forEach((channel) => (channel.side = "left"));
         v.channels[0]!.markers = [markerInZone("left-forearm-palmar"), markerInZone("left-wrist-palmar")];
         v.channels[1]!.markers = [markerInZone("left-forearm-dorsal"), markerInZone("left-wrist-dorsal")];
-      },
-    },
-    {
-      reason: "Pinkness lasting into the evening under channel 1: pulse duration reduced.",
-      mutate: (v) => {
-        v.channels[0]!.settings.phaseDurationUs = "250";
       },
     },
   ], "grasp-and-release", false);

@@ -10,6 +10,7 @@ export type EmailMessage =
     }
   | { template: "password-reset"; to: string; data: { name: string; url: string } }
   | { template: "programme-updated"; to: string; data: { name: string; clinicName: string; url: string } }
-  | { template: "flag-raised"; to: string; data: { name: string; urgent: boolean; url: string } };
+  | { template: "flag-raised"; to: string; data: { name: string; urgent: boolean; url: string } }
+  | { template: "new-messages"; to: string; data: { name: string; url: string } };
 
 export type EmailTemplateName = EmailMessage["template"];

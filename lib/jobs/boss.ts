@@ -2,7 +2,10 @@ import PgBoss from "pg-boss";
 import { env } from "@/lib/env";
 
 // Queue names are the contract between whoever enqueues a job and the worker that runs it.
-export const QUEUES = { email: "email", dailyRules: "daily-rules" } as const;
+export const QUEUES = { email: "email", dailyRules: "daily-rules", messageNotify: "message-notify" } as const;
+
+// "short": at most one waiting job per key, so a burst of messages to one person becomes one notification job.
+const QUEUE_POLICIES: Partial<Record<(typeof QUEUES)[keyof typeof QUEUES], "short">> = { "message-notify": "short" };
 
 const globalForBoss = globalThis as unknown as { ramplineBoss?: Promise<PgBoss> };
 
@@ -11,10 +14,12 @@ async function startBoss(): Promise<PgBoss> {
   boss.on("error", (error) => console.error("[jobs] pg-boss error:", error));
   await boss.start();
   for (const name of Object.values(QUEUES)) {
-    await boss.createQueue(name);
+    await boss.createQueue(name, { name, ...(QUEUE_POLICIES[name] ? { policy: QUEUE_POLICIES[name] } : {}) });
   }
   return boss;
 }
+
+export { QUEUE_POLICIES };
 
 export function getBoss(): Promise<PgBoss> {
   globalForBoss.ramplineBoss ??= startBoss().catch((error) => {

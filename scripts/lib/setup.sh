@@ -164,6 +164,13 @@ common_setup() {
   start_cluster
 }
 
+# npx and tsx start node as a child process: stopping only the parent would leave the server running.
+kill_tree() {
+  local pid="$1" child
+  for child in $(cat /proc/"$pid"/task/*/children 2>/dev/null); do kill_tree "$child"; done
+  kill "$pid" 2>/dev/null || true
+}
+
 # Waits until a URL answers 200, or gives up.
 wait_for_url() {
   local url="$1" seconds="${2:-60}"

@@ -1,7 +1,7 @@
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
-import { member, photo, screening } from "@/db/schema";
+import { checkIn, member, photo, screening } from "@/db/schema";
 import { createClinic, createPerson, TEST_PASSWORD } from "../support/factories";
 import { demo } from "./support/demo-accounts";
 import { httpRequest, httpSignIn } from "./support/http";
@@ -14,7 +14,7 @@ type Outcome = "ok" | "in" | 401 | 403 | 404;
 const WHO: Who[] = ["anonymous", "client", "carer", "therapist", "otherTherapist", "admin", "otherAdmin"];
 
 const cookies = {} as Record<Who, string | undefined>;
-const ids = { arthur: "demo-client-arthur", brenda: "demo-client-brenda", foreign: "", priyaMember: "", arthurPhoto: "", arthurScreening: "" };
+const ids = { arthur: "demo-client-arthur", brenda: "demo-client-brenda", foreign: "", priyaMember: "", arthurPhoto: "", arthurScreening: "", arthurCheckIn: "" };
 let foreignClientName = "";
 
 beforeAll(async () => {
@@ -31,6 +31,8 @@ beforeAll(async () => {
   ids.arthurPhoto = arthurPhoto!.id;
   const [arthurScreening] = await db().select().from(screening).where(eq(screening.clientId, ids.arthur));
   ids.arthurScreening = arthurScreening!.id;
+  const [arthurCheckIn] = await db().select().from(checkIn).where(eq(checkIn.clientId, ids.arthur));
+  ids.arthurCheckIn = arthurCheckIn!.id;
   cookies.client = await httpSignIn(demo.client.email, demo.password);
   cookies.carer = await httpSignIn(demo.carer.email, demo.password);
   cookies.therapist = await httpSignIn(demo.therapist.email, demo.password);
@@ -104,7 +106,7 @@ const rows: Row[] = [
     (page): Row => ({ method: "GET", label: `/clients/<own clinic's client>/${page}`, path: () => `/clients/${ids.arthur}/${page}`, secret: () => demo.client.name, expect: { ...staffOnly, ...arthurStaff } }),
   ),
   { method: "GET", label: "/clients/<own clinic's client>/screening/new", path: () => `/clients/${ids.arthur}/screening/new`, secret: () => demo.client.name, expect: { ...staffOnly, therapist: "ok", otherTherapist: 404, admin: 403, otherAdmin: 404 } },
-  ...["/programme", "/programme/handout"].map(
+  ...["/programme", "/programme/handout", "/check-in", "/history"].map(
     (path): Row => ({ method: "GET", path: () => path, expect: { anonymous: "in", client: "ok", carer: "ok", therapist: 403, otherTherapist: 403, admin: 403, otherAdmin: 403 } }),
   ),
   { method: "GET", path: () => "/audit", expect: { ...staffOnly, therapist: 403, otherTherapist: 403, admin: "ok", otherAdmin: "ok" } },
@@ -126,6 +128,10 @@ const rows: Row[] = [
   { method: "GET", label: "/api/photos/<own clinic's client's photo>", path: () => `/api/photos/${ids.arthurPhoto}`, okStatus: 200, expect: { ...arthurCircle, anonymous: 404 } },
   { method: "GET", label: "/api/clients/<own clinic's client>/programme/handout", path: () => `/api/clients/${ids.arthur}/programme/handout`, okStatus: 200, expect: arthurCircle },
   { method: "GET", label: "/api/clients/<another client of the clinic>/programme/handout", path: () => `/api/clients/${ids.brenda}/programme/handout`, okStatus: 404, expect: { ...arthurCircle, client: 404, carer: 404, therapist: "ok", admin: "ok" } },
+  { method: "POST", label: "/api/clients/<own clinic's client>/check-ins", path: () => `/api/clients/${ids.arthur}/check-ins`, body: {}, expect: { anonymous: 401, client: "ok", carer: "ok", therapist: 403, otherTherapist: 403, admin: 403, otherAdmin: 403 } },
+  { method: "POST", label: "/api/clients/<another client of the clinic>/check-ins", path: () => `/api/clients/${ids.brenda}/check-ins`, body: {}, expect: { anonymous: 401, client: 404, carer: 404, therapist: 403, otherTherapist: 403, admin: 403, otherAdmin: 403 } },
+  { method: "POST", label: "/api/clients/<own clinic's client>/electrode-packs", path: () => `/api/clients/${ids.arthur}/electrode-packs`, body: {}, expect: { anonymous: 401, client: "ok", carer: "ok", therapist: 403, otherTherapist: 403, admin: 403, otherAdmin: 403 } },
+  { method: "GET", label: "/clients/<own clinic's client>/check-ins/<a check-in>", path: () => `/clients/${ids.arthur}/check-ins/${ids.arthurCheckIn}`, secret: () => demo.client.name, expect: { ...staffOnly, ...arthurStaff } },
   { method: "POST", path: () => "/api/programme-templates", body: {}, expect: { anonymous: 401, client: 403, carer: 403, therapist: "ok", otherTherapist: "ok", admin: 403, otherAdmin: 403 } },
   // better-auth endpoints Rampline does not use are not reachable at all, whoever asks.
   ...["/api/auth/sign-up/email", "/api/auth/organization/invite-member", "/api/auth/organization/create", "/api/auth/admin/ban-user", "/api/auth/admin/set-role"].map(

@@ -8,6 +8,7 @@ import { env } from "@/lib/env";
 import { deliverEmail } from "@/lib/email/deliver";
 import { enqueueEmail } from "@/lib/email/enqueue";
 import { inviteTherapist } from "@/lib/invitations/invite-therapist";
+import { postMessage } from "@/lib/messages/post-message";
 import { stopBoss } from "@/lib/jobs/boss";
 import { startWorkers } from "@/lib/jobs/workers";
 import { createClinic, createPerson, uniqueSuffix } from "../support/factories";
@@ -103,3 +104,30 @@ describe("e-mail through the queue", () => {
     expect(delivered(to)[0]!.subject).toContain(clinic.clinicName);
   });
 });
+
+describe("message notifications", () => {
+  it("coalesce a burst of ten messages into one e-mail per recipient, and lose none while the mail service is down", async () => {
+    await stopFake();
+    const clinic = await createClinic("Messaging clinic");
+    const therapist = await createPerson(clinic, "therapist");
+    const client = await createPerson(clinic, "client", { therapistId: therapist.userId });
+    const carer = await createPerson(clinic, "carer", { clientId: client.clientId! });
+
+    for (let n = 1; n <= 5; n++) await postMessage(client, client.clientId!, { body: `Message ${n}` });
+    // The quiet period (2 s in the tests) passes with nothing listening: the attempts fail and wait to be retried.
+    await new Promise((resolve) => setTimeout(resolve, 3000));
+    for (let n = 6; n <= 10; n++) await postMessage(client, client.clientId!, { body: `Message ${n}` });
+    await startFake();
+
+    const subject = "You have new messages in Rampline";
+    const received = (to: string) => delivered(to).filter((m) => m.subject === subject);
+    expect(await waitUntil(() => received(therapist.email).length > 0 && received(carer.email).length > 0, 30_000)).toBe(true);
+    // Give a second e-mail every chance to appear before counting.
+    await new Promise((resolve) => setTimeout(resolve, 5000));
+    expect(received(therapist.email)).toHaveLength(1);
+    expect(received(carer.email)).toHaveLength(1);
+    expect(received(client.email)).toHaveLength(0);
+    expect(received(carer.email)[0]!.html).not.toContain("Message 1");
+  });
+});
+

@@ -7,3 +7,4 @@ if (!new URL(url).pathname.endsWith("_test")) {
 // The in-process mail fake of the queue tests listens here; no other integration test sends mail.
 process.env.RESEND_BASE_URL = `http://127.0.0.1:${process.env.RAMPLINE_INTEGRATION_MAIL_PORT ?? "3126"}`;
 process.env.MAIL_RETRY_DELAY_SECONDS ??= "1";
+process.env.MESSAGE_QUIET_SECONDS ??= "2";

@@ -4,7 +4,7 @@ import type { CheckInInput } from "@/lib/check-ins/schema";
 
 const NUMBERS = Array.from({ length: 11 }, (_, n) => n);
 
-// 0 to 10 as eleven large buttons in a row that wraps, with the ends named in words.
+// 0 to 10 as eleven large choices in a row that wraps, with the ends named in words.
 export function ComfortScale({ register, error }: { register: UseFormRegister<CheckInInput>; error?: string }) {
   return (
     <fieldset className="flex flex-col gap-2" aria-describedby={error ? "comfort-error" : "comfort-ends"}>
@@ -14,12 +14,10 @@ export function ComfortScale({ register, error }: { register: UseFormRegister<Ch
       </p>
       <div className="flex flex-wrap gap-2">
         {NUMBERS.map((n) => (
-          <label key={n} className="relative">
-            <input type="radio" value={n} className="peer sr-only" {...register("comfort", { setValueAs: (v) => (v === "" || v === null ? undefined : Number(v)) })} />
-            <span className="flex size-12 cursor-pointer items-center justify-center rounded-md border-2 border-ink bg-card text-lg font-bold tabular-nums peer-checked:bg-ink peer-checked:text-white peer-focus-visible:outline peer-focus-visible:outline-3 peer-focus-visible:outline-offset-2 peer-focus-visible:outline-focus">
-              {n}
-              <span className="sr-only">{n === 0 ? " (very uncomfortable)" : n === 10 ? " (completely comfortable)" : ""}</span>
-            </span>
+          <label key={n} className="flex min-h-12 min-w-16 cursor-pointer items-center gap-2 rounded-md border-2 border-ink bg-card px-3 text-lg font-bold tabular-nums has-[:checked]:bg-ink has-[:checked]:text-white">
+            <input type="radio" value={n} className="size-5 accent-white" {...register("comfort")} />
+            {n}
+            <span className="sr-only">{n === 0 ? " (very uncomfortable)" : n === 10 ? " (completely comfortable)" : ""}</span>
           </label>
         ))}
       </div>

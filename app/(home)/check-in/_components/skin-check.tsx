@@ -7,8 +7,6 @@ import type { CheckInInput } from "@/lib/check-ins/schema";
 import { SKIN_LEVELS, SKIN_SCALE } from "@/lib/check-ins/skin-scale";
 import type { CheckInChannel } from "./check-in-form";
 
-const toLevel = (v: unknown) => (v === "" || v === null || v === undefined ? undefined : Number(v));
-
 // One skin check per electrode, on the five-level scale in plain words, with a photo when there is any change.
 export function SkinCheck({ clientId, channels, form }: { clientId: string; channels: CheckInChannel[]; form: UseFormReturn<CheckInInput, unknown, unknown> }) {
   const skin = useWatch({ control: form.control, name: "skin" });
@@ -29,7 +27,7 @@ export function SkinCheck({ clientId, channels, form }: { clientId: string; chan
             <fieldset key={`${channel.id}-${electrode}`} className="flex flex-col gap-1 rounded-lg border border-line bg-card p-4" aria-describedby={error ? `skin-${i}-error` : undefined}>
               <legend className="px-1 text-lg font-bold">{legend}</legend>
               {SKIN_LEVELS.map((n) => (
-                <Choice key={n} label={SKIN_SCALE[n].words} hint={SKIN_SCALE[n].hint} value={n} {...form.register(`skin.${i}.level`, { setValueAs: toLevel })} />
+                <Choice key={n} label={SKIN_SCALE[n].words} hint={SKIN_SCALE[n].hint} value={n} {...form.register(`skin.${i}.level`)} />
               ))}
               {error ? <FieldError id={`skin-${i}-error`} message={error} /> : null}
               {level >= 2 ? (
