@@ -3,7 +3,7 @@ import { NextResponse, type NextRequest } from "next/server";
 
 // Cheap, optimistic work only: a per-request CSP nonce, and sending people without a session cookie to sign in.
 // Every page, action and route handler still checks the session and the record itself.
-const SIGNED_IN_AREAS = [/^\/home$/, /^\/caseload/, /^\/team/, /^\/clients/, /^\/today/, /^\/programme/, /^\/audit/, /^\/check-in/, /^\/session/, /^\/history/, /^\/review/];
+const SIGNED_IN_AREAS = [/^\/home$/, /^\/caseload/, /^\/team/, /^\/clients/, /^\/today/, /^\/programme/, /^\/audit/, /^\/check-in/, /^\/session/, /^\/history/, /^\/review/, /^\/messages/, /^\/settings/];
 
 function contentSecurityPolicy(nonce: string): string {
   const dev = process.env.NODE_ENV === "development";

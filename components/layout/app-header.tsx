@@ -4,7 +4,7 @@ import type { Actor } from "@/lib/auth/actor";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import { SignOutButton } from "./sign-out-button";
 
-export type NavItem = { href: string; label: string };
+export type NavItem = { href: string; label: string; badge?: string };
 
 export function AppHeader({ actor, nav }: { actor: Actor; nav: NavItem[] }) {
   return (
@@ -18,6 +18,7 @@ export function AppHeader({ actor, nav }: { actor: Actor; nav: NavItem[] }) {
                 <li key={item.href}>
                   <Link href={item.href} className="inline-flex min-h-11 items-center rounded-md px-3 font-bold no-underline hover:bg-line-soft">
                     {item.label}
+                    {item.badge ? <span className="ml-2 rounded-full bg-ink px-2 text-sm text-white">{item.badge}</span> : null}
                   </Link>
                 </li>
               ))}
@@ -31,6 +32,9 @@ export function AppHeader({ actor, nav }: { actor: Actor; nav: NavItem[] }) {
               {ROLE_LABELS[actor.role]} · {actor.clinicName}
             </span>
           </p>
+          <Link href="/settings" className="text-sm font-bold">
+            E-mail settings
+          </Link>
           <SignOutButton />
         </div>
       </div>

@@ -95,3 +95,8 @@ export type CaseloadRow = Awaited<ReturnType<typeof listCaseloadRowsByTherapistI
 export async function listClientsByOrganizationId(organizationId: string) {
   return db().select({ id: client.id, fullName: client.fullName }).from(client).where(eq(client.organizationId, organizationId)).orderBy(asc(client.fullName));
 }
+
+export async function listClientIdsByTherapistId(organizationId: string, therapistId: string) {
+  const rows = await db().select({ id: client.id }).from(client).where(and(eq(client.organizationId, organizationId), eq(client.primaryTherapistId, therapistId)));
+  return rows.map((row) => row.id);
+}

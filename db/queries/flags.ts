@@ -1,5 +1,5 @@
 import "server-only";
-import { and, desc, eq, inArray, ne } from "drizzle-orm";
+import { and, asc, count, desc, eq, inArray, ne, sql } from "drizzle-orm";
 import { db, type Database } from "../client";
 import { client, flag, type NewFlag } from "../schema";
 
@@ -39,4 +39,37 @@ export async function getFlagById(flagId: string, executor: Database = db()) {
 export async function updateFlagById(flagId: string, values: Partial<NewFlag>, executor: Database = db()) {
   const [row] = await executor.update(flag).set(values).where(eq(flag.id, flagId)).returning();
   return row ?? null;
+}
+
+export async function countOpenFlagsByTherapistId(organizationId: string, therapistId: string) {
+  const [row] = await db()
+    .select({ n: count() })
+    .from(flag)
+    .innerJoin(client, eq(flag.clientId, client.id))
+    .where(and(eq(flag.organizationId, organizationId), eq(client.primaryTherapistId, therapistId), ne(flag.status, "resolved")));
+  return row?.n ?? 0;
+}
+
+// The review queue: flags not yet resolved, urgent first, then oldest first.
+export async function listReviewQueue(organizationId: string, therapistId: string | null) {
+  const conditions = [eq(flag.organizationId, organizationId), ne(flag.status, "resolved")];
+  if (therapistId) conditions.push(eq(client.primaryTherapistId, therapistId));
+  return db()
+    .select({ flag, clientName: client.fullName })
+    .from(flag)
+    .innerJoin(client, eq(flag.clientId, client.id))
+    .where(and(...conditions))
+    .orderBy(sql`case when ${flag.severity} = 'urgent' then 0 else 1 end`, asc(flag.createdAt));
+}
+
+export async function listResolvedFlagsByOrganizationId(organizationId: string, therapistId: string | null, limit = 20) {
+  const conditions = [eq(flag.organizationId, organizationId), eq(flag.status, "resolved")];
+  if (therapistId) conditions.push(eq(client.primaryTherapistId, therapistId));
+  return db()
+    .select({ flag, clientName: client.fullName })
+    .from(flag)
+    .innerJoin(client, eq(flag.clientId, client.id))
+    .where(and(...conditions))
+    .orderBy(desc(flag.resolvedAt))
+    .limit(limit);
 }

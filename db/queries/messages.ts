@@ -53,3 +53,15 @@ export async function getNotificationSettingByUserId(userId: string) {
 export async function upsertNotificationSetting(userId: string, values: { emailMessages: boolean; emailProgrammeUpdates: boolean; emailFlags: boolean }) {
   await db().insert(notificationSetting).values({ userId, ...values }).onConflictDoUpdate({ target: notificationSetting.userId, set: values });
 }
+
+// Messages by others that this person has not read, over the threads given (their own, or their caseload's).
+export async function countUnreadForUser(userId: string, clientIds: string[]) {
+  if (clientIds.length === 0) return 0;
+  const result = await db().execute<{ n: number }>(sql`
+    SELECT count(*)::int AS n FROM message m
+    LEFT JOIN thread_read r ON r.client_id = m.client_id AND r.user_id = ${userId}
+    WHERE m.client_id IN (${sql.join(clientIds.map((id) => sql`${id}`), sql`, `)})
+      AND (m.author_id IS NULL OR m.author_id <> ${userId})
+      AND (r.last_read_at IS NULL OR m.created_at > r.last_read_at)`);
+  return result.rows[0]?.n ?? 0;
+}

@@ -4,6 +4,7 @@ import { checkIn, programme, programmeVersion } from "../schema";
 import { getProgrammeByClientId, getLatestVersionByProgrammeId, listVersionsByProgrammeId } from "../queries/programmes";
 import type { Actor } from "@/lib/auth/actor";
 import { logCheckIn } from "@/lib/check-ins/log-check-in";
+import { confirmVersion } from "@/lib/confirmations/confirm-version";
 import type { CheckInInput } from "@/lib/check-ins/schema";
 import type { ProgrammeContent } from "@/lib/programmes/content";
 import { contentToFormValues } from "@/lib/programmes/form-values";
@@ -71,7 +72,9 @@ export async function seedDemoCheckIns(database: Database): Promise<number> {
   const callum = demoClients.find((c) => c.key === "callum")!;
   const callumId = "demo-client-callum";
   const callumProgramme = await getProgrammeByClientId(callumId);
-  if (callumProgramme && !(await hasCheckIns(database, callumId))) {
+  // Only where Callum's programme is still at version 1: the story below publishes version 2 in reply to a report.
+  const callumVersions = callumProgramme ? await listVersionsByProgrammeId(callumProgramme.id) : [];
+  if (callumProgramme && callumVersions.length === 1 && !(await hasCheckIns(database, callumId))) {
     const owen = actor(demoTherapists.find((t) => t.key === "owen")!, "therapist", null);
     const you = actor(callum, "client", callumId);
     await backdate(database, callumId, 1, 24);
@@ -92,6 +95,7 @@ export async function seedDemoCheckIns(database: Database): Promise<number> {
     const { revision } = await saveDraft(owen, callumId, { values, baseRevision: (await getProgrammeByClientId(callumId))!.draftRevision });
     await publishProgramme(owen, callumId, { reason: "Redness lasting into the evening under channel 1, electrode B: pulse duration reduced.", baseRevision: revision, promptedBy: { type: "check-in", id: report.checkInId } });
     await backdate(database, callumId, 2, 7);
+    await confirmVersion(you, callumId, { versionNumber: 2 });
     const v2 = (await getLatestVersionByProgrammeId(callumProgramme.id))!.content as ProgrammeContent;
     for (let n = 6; n >= 1; n--) {
       await logCheckIn(you, callumId, sessionInput(v2, dayAgo(n), 24 - n));

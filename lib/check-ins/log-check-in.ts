@@ -4,6 +4,7 @@ import { getLatestCheckInByClientId, insertCheckIn } from "@/db/queries/check-in
 import { insertFlags } from "@/db/queries/flags";
 import { listPhotosByIds } from "@/db/queries/photos";
 import { getUserById } from "@/db/queries/users";
+import { getNotificationSettingByUserId } from "@/db/queries/messages";
 import { inTransaction } from "@/db/transaction";
 import type { Actor } from "@/lib/auth/actor";
 import { requireClientAccess } from "@/lib/auth/access";
@@ -70,8 +71,9 @@ export async function logCheckIn(actor: Actor, clientId: string, input: CheckInI
       tx,
     );
     const therapist = flags.length > 0 ? await getUserById(client.primaryTherapistId, tx) : null;
-    if (therapist) {
-      const urgent = flags.some((f) => f.severity === "urgent");
+    const urgent = flags.some((f) => f.severity === "urgent");
+    // Urgent reports always reach the therapist; review-level ones follow their e-mail settings.
+    if (therapist && (urgent || (await getNotificationSettingByUserId(therapist.id)).emailFlags)) {
       await enqueueEmail({ template: "flag-raised", to: therapist.email, data: { name: therapist.name, urgent, url: `${env().APP_URL}/clients/${client.id}` } }, { jobs });
     }
     return { checkInId: row.id, flags: flags.map((f) => ({ id: f.id, rule: f.rule, severity: f.severity, title: f.title })) };

@@ -18,7 +18,7 @@ export const checkInSchema = z.object({
   comfort: choiceNumber(z.number({ error: "Choose how comfortable it was, from 0 to 10." }).int().min(0, "Choose from 0 to 10.").max(10, "Choose from 0 to 10.")),
   movement: z.enum(["full", "partial", "none"], { error: "Say what movement you saw." }),
   fatigue: z.enum(["none", "mild", "moderate", "severe"], { error: "Say how tired the muscles felt." }),
-  versionNumber: z.number().int().min(1).optional(),
+  versionNumber: choiceNumber(z.number({ error: "Say which settings your stimulator was set to." }).int().min(1).optional()),
   channels: z
     .array(
       z.object({

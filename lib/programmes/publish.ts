@@ -7,6 +7,8 @@ import { inTransaction } from "@/db/transaction";
 import type { Actor } from "@/lib/auth/actor";
 import { requireClientAccess } from "@/lib/auth/access";
 import { enqueueEmail } from "@/lib/email/enqueue";
+import { addToThread } from "@/lib/messages/post-message";
+import { getNotificationSettingByUserId } from "@/db/queries/messages";
 import { env } from "@/lib/env";
 import { AppError, forbidden } from "@/lib/errors";
 import { parseInput } from "@/lib/validation";
@@ -60,7 +62,17 @@ export async function publishProgramme(actor: Actor, clientId: string, input: z.
       },
       tx,
     );
+    // The thread shows the change where the conversation about it happened.
+    const summary = changes.length > 0 ? ` What changed: ${changes.join("; ")}.` : "";
+    await addToThread(tx, jobs, {
+      clientId,
+      authorId: null,
+      kind: "system",
+      body: `${actor.name} published version ${version.number} of the programme. Reason: ${reason}${summary} Please set your stimulator to match, then confirm it on your Programme page.`,
+      about: { type: "version", id: version.id },
+    });
     for (const person of await listCircleRecipientsByClientId(clientId, tx)) {
+      if (!(await getNotificationSettingByUserId(person.id)).emailProgrammeUpdates) continue;
       await enqueueEmail(
         { template: "programme-updated", to: person.email, data: { name: person.name, clinicName: actor.clinicName, url: `${env().APP_URL}/programme` } },
         { jobs },

@@ -2,7 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { EmptyState } from "@/components/ui/card";
 import { getClinicById } from "@/db/queries/clinics";
-import { getLatestVersionByProgrammeId, getProgrammeByClientId } from "@/db/queries/programmes";
+import { getProgrammeByClientId, listVersionsByProgrammeId } from "@/db/queries/programmes";
+import { confirmationStatus } from "@/lib/confirmations/read-confirmations";
 import { requireOwnClient } from "@/lib/auth/own-client";
 import type { ProgrammeContent } from "@/lib/programmes/content";
 import { zoneLabelForMarker } from "@/lib/programmes/zone-names";
@@ -15,7 +16,8 @@ const londonToday = () => new Intl.DateTimeFormat("en-CA", { timeZone: "Europe/L
 export default async function CheckInPage({ searchParams }: { searchParams: Promise<{ minutes?: string }> }) {
   const { actor, client } = await requireOwnClient();
   const programme = await getProgrammeByClientId(client.id);
-  const version = programme ? await getLatestVersionByProgrammeId(programme.id) : null;
+  const versions = programme ? await listVersionsByProgrammeId(programme.id) : [];
+  const version = versions[0]?.version ?? null;
   if (!version) {
     return (
       <EmptyState title="Nothing to log yet">
@@ -33,6 +35,12 @@ export default async function CheckInPage({ searchParams }: { searchParams: Prom
     electrodes: [zoneLabelForMarker(channel.markers[0]), zoneLabelForMarker(channel.markers[1])],
   }));
   const minutes = Number((await searchParams).minutes);
+  // Until someone confirms the stimulator matches the new version, the log asks which settings were used. The
+  // choice is offered when both versions have the same channels, so the same form fits either.
+  const previous = versions[1]?.version;
+  const sameChannels = previous && (previous.content as ProgrammeContent).channels.map((c) => c.id).join() === content.channels.map((c) => c.id).join();
+  const unconfirmed = previous ? !(await confirmationStatus(client.id, version.id)).anyConfirmed : false;
+  const versionChoice = unconfirmed && sameChannels && previous ? { current: version.number, previous: previous.number } : null;
   return (
     <div className="flex flex-col gap-6">
       <div>
@@ -48,6 +56,8 @@ export default async function CheckInPage({ searchParams }: { searchParams: Prom
         defaultMinutes={Number.isInteger(minutes) && minutes > 0 ? minutes : content.schedule.minutesPerSession}
         channels={channels}
         clinicPhone={clinic?.contact.phone ?? null}
+        versionNumber={version.number}
+        versionChoice={versionChoice}
       />
     </div>
   );

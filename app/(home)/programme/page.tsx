@@ -7,6 +7,8 @@ import { Card, EmptyState } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import { getProgrammeByClientId, listVersionsByProgrammeId } from "@/db/queries/programmes";
 import { requireOwnClient } from "@/lib/auth/own-client";
+import { confirmationStatus } from "@/lib/confirmations/read-confirmations";
+import { ConfirmVersion } from "./_components/confirm-version";
 import type { ProgrammeContent } from "@/lib/programmes/content";
 
 export const metadata: Metadata = { title: "Your programme" };
@@ -19,6 +21,7 @@ export default async function HomeProgrammePage() {
   const versions = programme ? await listVersionsByProgrammeId(programme.id) : [];
   const [current, previous] = versions;
   const whose = actor.role === "carer" ? `${client.fullName}'s` : "Your";
+  const confirmations = current ? await confirmationStatus(client.id, current.version.id) : null;
   if (!current) {
     return (
       <EmptyState title="No programme yet">
@@ -34,6 +37,13 @@ export default async function HomeProgrammePage() {
           Version {current.version.number}, from {longDate.format(current.version.publishedAt)}, by {current.authorName}.
         </p>
       </div>
+      {confirmations?.anyConfirmed ? (
+        <Notice tone="ok" word="Stimulator set">
+          {confirmations.confirmed.map((c) => `${c.name} confirmed on ${longDate.format(c.at)}`).join("; ")} that the stimulator matches version {current.version.number}.
+        </Notice>
+      ) : (
+        <ConfirmVersion clientId={client.id} versionNumber={current.version.number} />
+      )}
       {previous ? (
         <Card title={`What changed in version ${current.version.number}`}>
           <p className="mb-3">{current.version.reason}</p>

@@ -15,13 +15,22 @@ export type CheckInChannel = { id: string; number: number; target: string; ceili
 
 const asNumber = (value: unknown) => (value === "" || value === null || value === undefined ? undefined : Number(value));
 
-export function CheckInForm({ clientId, today, defaultMinutes, channels, clinicPhone }: { clientId: string; today: string; defaultMinutes: number; channels: CheckInChannel[]; clinicPhone: string | null }) {
+export function CheckInForm({ clientId, today, defaultMinutes, channels, clinicPhone, versionNumber, versionChoice }: {
+  clientId: string;
+  today: string;
+  defaultMinutes: number;
+  channels: CheckInChannel[];
+  clinicPhone: string | null;
+  versionNumber: number;
+  versionChoice: { current: number; previous: number } | null;
+}) {
   const [saved, setSaved] = useState<SavedCheckIn | null>(null);
   const { form, onSubmit, formError, busy } = useApiForm({
     schema: checkInSchema,
     defaultValues: {
       sessionDate: today,
       minutes: defaultMinutes,
+      versionNumber: versionChoice ? (undefined as unknown as number) : versionNumber,
       channels: channels.map((channel) => ({ channelId: channel.id, amplitudeMa: undefined as unknown as number })),
       skin: channels.flatMap((channel) => (["A", "B"] as const).map((electrode) => ({ channelId: channel.id, electrode, level: undefined as unknown as number, spreads: false, itch: false, photoIds: [] }))),
       electrodeCondition: "fine",
@@ -35,6 +44,18 @@ export function CheckInForm({ clientId, today, defaultMinutes, channels, clinicP
   return (
     <form method="post" onSubmit={onSubmit} noValidate className="flex flex-col gap-8" aria-label="Session log">
       <FormAlert message={formError} />
+      {versionChoice ? (
+        <ChoiceGroup
+          legend="Which settings was your stimulator set to?"
+          hint="Your therapist changed the programme and nobody has confirmed the stimulator was changed to match yet."
+          options={[
+            { value: String(versionChoice.current), label: `The new settings (version ${versionChoice.current})` },
+            { value: String(versionChoice.previous), label: `The settings before (version ${versionChoice.previous})` },
+          ]}
+          registration={form.register("versionNumber")}
+          error={errors.versionNumber?.message}
+        />
+      ) : null}
       <div className="grid gap-4 sm:grid-cols-2">
         <TextField label="Day of the session" type="date" max={today} {...form.register("sessionDate")} error={errors.sessionDate?.message} />
         <TextField label="Minutes done" type="number" inputMode="numeric" min={1} {...form.register("minutes", { setValueAs: asNumber })} error={errors.minutes?.message} />

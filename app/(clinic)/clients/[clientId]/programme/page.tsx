@@ -22,10 +22,16 @@ function startingValues(start: string | undefined, clinicTemplates: { id: string
   return null;
 }
 
-export default async function ProgrammePage({ params, searchParams }: { params: Promise<{ clientId: string }>; searchParams: Promise<{ start?: string }> }) {
+// A change proposed from a report or a message carries a link back to it, kept with the version it becomes.
+function parsePrompt(prompt: string | undefined): { type: "check-in" | "flag" | "message"; id: string } | undefined {
+  const match = /^(check-in|flag|message):([\w-]{1,100})$/.exec(prompt ?? "");
+  return match ? { type: match[1] as "check-in" | "flag" | "message", id: match[2]! } : undefined;
+}
+
+export default async function ProgrammePage({ params, searchParams }: { params: Promise<{ clientId: string }>; searchParams: Promise<{ start?: string; prompt?: string }> }) {
   const { clientId } = await params;
   const { actor, client } = await requirePageClientAccess(clientId, "therapist", "admin");
-  const [programme, clinicTemplates, gate, { start }] = await Promise.all([
+  const [programme, clinicTemplates, gate, { start, prompt }] = await Promise.all([
     getProgrammeByClientId(clientId),
     listTemplatesByOrganizationId(actor.organizationId),
     getPublishingGate(clientId),
@@ -64,6 +70,7 @@ export default async function ProgrammePage({ params, searchParams }: { params: 
           initialRevision={programme?.draftRevision ?? 0}
           hasPublishedVersion={latest !== null}
           screeningReasons={gate.reasons}
+          promptedBy={parsePrompt(prompt)}
         />
       ) : (
         <TemplatePicker clientId={clientId} clinicTemplates={clinicTemplates} />

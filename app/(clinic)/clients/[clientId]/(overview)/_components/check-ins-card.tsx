@@ -49,7 +49,9 @@ export async function CheckInsCard({ clientId }: { clientId: string }) {
           </tbody>
         </table>
       )}
-      <p className="mt-4">
+      <p className="mt-4 flex flex-wrap gap-4">
+        <Link href={`/clients/${clientId}/messages`}>Messages</Link>
+        <Link href={`/clients/${clientId}/timeline`}>Timeline</Link>
         <Link href={`/clients/${clientId}/trends`}>Trends over time</Link>
       </p>
     </Card>

@@ -22,9 +22,10 @@ export type BuilderProps = {
   // Whether there is a published version yet: a first programme is "early" for the rest-time note.
   hasPublishedVersion: boolean;
   screeningReasons: string[];
+  promptedBy?: { type: "check-in" | "flag" | "message"; id: string };
 };
 
-export function ProgrammeBuilder({ clientId, initialValues, initialRevision, hasPublishedVersion, screeningReasons }: BuilderProps) {
+export function ProgrammeBuilder({ clientId, initialValues, initialRevision, hasPublishedVersion, screeningReasons, promptedBy }: BuilderProps) {
   const form = useForm<ProgrammeFormValues>({ defaultValues: initialValues });
   const channels = useFieldArray({ control: form.control, name: "channels", keyName: "fieldKey" });
   const values = useWatch({ control: form.control }) as ProgrammeFormValues;
@@ -81,7 +82,7 @@ export function ProgrammeBuilder({ clientId, initialValues, initialRevision, has
           <StepList name="ownCautions" legend="Your own cautions for this client" control={form.control} register={form.register} addLabel="Add a caution" />
         </section>
         <SaveTemplate />
-        <PublishPanel clientId={clientId} autosave={autosave} reports={reports} contentErrors={contentErrors} screeningReasons={screeningReasons} />
+        <PublishPanel clientId={clientId} autosave={autosave} reports={reports} contentErrors={contentErrors} screeningReasons={screeningReasons} promptedBy={promptedBy} />
       </form>
     </FormProvider>
   );

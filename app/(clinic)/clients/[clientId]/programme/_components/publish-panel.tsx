@@ -10,12 +10,15 @@ import type { useDraftAutosave } from "./use-draft-autosave";
 type Result = { number: number; changes: string[] };
 
 // What still stops publishing is listed as the therapist works; the server checks the same things again.
-export function PublishPanel({ clientId, autosave, reports, contentErrors, screeningReasons }: {
+const PROMPT_WORDS = { "check-in": "a session log", flag: "a flag", message: "a message" } as const;
+
+export function PublishPanel({ clientId, autosave, reports, contentErrors, screeningReasons, promptedBy }: {
   clientId: string;
   autosave: ReturnType<typeof useDraftAutosave>;
   reports: ChannelReport[];
   contentErrors: Record<string, string>;
   screeningReasons: string[];
+  promptedBy?: { type: "check-in" | "flag" | "message"; id: string };
 }) {
   const router = useRouter();
   const [reason, setReason] = useState("");
@@ -37,6 +40,7 @@ export function PublishPanel({ clientId, autosave, reports, contentErrors, scree
       const result = await sendJson<Result>("POST", `/api/clients/${encodeURIComponent(clientId)}/programme/versions`, {
         reason,
         baseRevision: autosave.revision.current,
+        ...(promptedBy ? { promptedBy } : {}),
       });
       setPublished(result);
       setReason("");
@@ -58,6 +62,9 @@ export function PublishPanel({ clientId, autosave, reports, contentErrors, scree
         Publishing makes this the version in force: it cannot be changed afterwards, the client and carers are e-mailed
         that there is an update, and the reason is kept with it.
       </p>
+      {promptedBy ? (
+        <p className="mt-2 font-bold">This version will be linked to {PROMPT_WORDS[promptedBy.type]} that prompted it, on the client&apos;s timeline.</p>
+      ) : null}
       {blocking.length > 0 ? (
         <div className="mt-4">
           <Notice tone="blocks" title="Still to sort out before publishing">
