@@ -63,10 +63,10 @@ export function ThreadView({ clientId, staff, canWrite }: { clientId: string; st
                   ))}
                 </ul>
               ) : null}
-              {link || (staff && canWrite && !message.mine && message.kind === "message") ? (
+              {link || (staff && canWrite && message.kind === "message") ? (
                 <p className="mt-1 flex flex-wrap gap-4 text-sm">
                   {link ? <Link href={link.href}>{link.label}</Link> : null}
-                  {staff && canWrite && !message.mine && message.kind === "message" ? (
+                  {staff && canWrite && message.kind === "message" ? (
                     <Link href={`/clients/${clientId}/programme?prompt=message:${message.id}`}>Propose a change from this message</Link>
                   ) : null}
                 </p>

@@ -11,6 +11,8 @@ export type TimelineSources = {
   confirmations: { at: Date; name: string; versionNumber: number }[];
 };
 
+const TIE_ORDER: Record<TimelineKind, number> = { confirmation: 0, "flag-resolved": 1, version: 2, message: 3, flag: 4, "check-in": 5 };
+
 const shorten = (text: string, max = 140) => (text.length > max ? `${text.slice(0, max - 1)}…` : text);
 
 export function buildTimeline(clientId: string, sources: TimelineSources): TimelineEntry[] {
@@ -38,5 +40,7 @@ export function buildTimeline(clientId: string, sources: TimelineSources): Timel
   for (const c of sources.confirmations) {
     entries.push({ at: c.at, kind: "confirmation", title: `${c.name} confirmed the stimulator matches version ${c.versionNumber}` });
   }
-  return entries.sort((a, b) => b.at.getTime() - a.at.getTime());
+  // A flag is written in the same transaction as the log that raised it, so their times are equal: the one that
+  // follows from the other comes first in a newest-first list.
+  return entries.sort((a, b) => b.at.getTime() - a.at.getTime() || TIE_ORDER[a.kind] - TIE_ORDER[b.kind]);
 }

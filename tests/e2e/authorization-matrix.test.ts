@@ -1,7 +1,7 @@
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
-import { checkIn, member, photo, screening } from "@/db/schema";
+import { checkIn, flag, member, photo, screening } from "@/db/schema";
 import { createClinic, createPerson, TEST_PASSWORD } from "../support/factories";
 import { demo } from "./support/demo-accounts";
 import { httpRequest, httpSignIn } from "./support/http";
@@ -14,7 +14,7 @@ type Outcome = "ok" | "in" | 401 | 403 | 404;
 const WHO: Who[] = ["anonymous", "client", "carer", "therapist", "otherTherapist", "admin", "otherAdmin"];
 
 const cookies = {} as Record<Who, string | undefined>;
-const ids = { arthur: "demo-client-arthur", brenda: "demo-client-brenda", foreign: "", priyaMember: "", arthurPhoto: "", arthurScreening: "", arthurCheckIn: "" };
+const ids = { arthur: "demo-client-arthur", brenda: "demo-client-brenda", foreign: "", priyaMember: "", arthurPhoto: "", arthurScreening: "", arthurCheckIn: "", callumFlag: "" };
 let foreignClientName = "";
 
 beforeAll(async () => {
@@ -33,6 +33,9 @@ beforeAll(async () => {
   ids.arthurScreening = arthurScreening!.id;
   const [arthurCheckIn] = await db().select().from(checkIn).where(eq(checkIn.clientId, ids.arthur));
   ids.arthurCheckIn = arthurCheckIn!.id;
+  // The seed raises one on Callum's skin report; any flag of the demo clinic will do.
+  const [callumFlag] = await db().select().from(flag).where(eq(flag.organizationId, "demo-clinic-larkmoor"));
+  ids.callumFlag = callumFlag!.id;
   cookies.client = await httpSignIn(demo.client.email, demo.password);
   cookies.carer = await httpSignIn(demo.carer.email, demo.password);
   cookies.therapist = await httpSignIn(demo.therapist.email, demo.password);
@@ -102,11 +105,11 @@ const rows: Row[] = [
     body: {},
     expect: { anonymous: 401, client: 404, carer: 403, therapist: "ok", otherTherapist: 404, admin: 403, otherAdmin: 403 },
   },
-  ...["programme", "programme/versions", "handout", "screening"].map(
+  ...["programme", "programme/versions", "handout", "screening", "messages", "timeline", "trends"].map(
     (page): Row => ({ method: "GET", label: `/clients/<own clinic's client>/${page}`, path: () => `/clients/${ids.arthur}/${page}`, secret: () => demo.client.name, expect: { ...staffOnly, ...arthurStaff } }),
   ),
   { method: "GET", label: "/clients/<own clinic's client>/screening/new", path: () => `/clients/${ids.arthur}/screening/new`, secret: () => demo.client.name, expect: { ...staffOnly, therapist: "ok", otherTherapist: 404, admin: 403, otherAdmin: 404 } },
-  ...["/programme", "/programme/handout", "/check-in", "/history"].map(
+  ...["/programme", "/programme/handout", "/check-in", "/history", "/messages", "/session"].map(
     (path): Row => ({ method: "GET", path: () => path, expect: { anonymous: "in", client: "ok", carer: "ok", therapist: 403, otherTherapist: 403, admin: 403, otherAdmin: 403 } }),
   ),
   { method: "GET", path: () => "/audit", expect: { ...staffOnly, therapist: 403, otherTherapist: 403, admin: "ok", otherAdmin: "ok" } },
@@ -132,6 +135,15 @@ const rows: Row[] = [
   { method: "POST", label: "/api/clients/<another client of the clinic>/check-ins", path: () => `/api/clients/${ids.brenda}/check-ins`, body: {}, expect: { anonymous: 401, client: 404, carer: 404, therapist: 403, otherTherapist: 403, admin: 403, otherAdmin: 403 } },
   { method: "POST", label: "/api/clients/<own clinic's client>/electrode-packs", path: () => `/api/clients/${ids.arthur}/electrode-packs`, body: {}, expect: { anonymous: 401, client: "ok", carer: "ok", therapist: 403, otherTherapist: 403, admin: 403, otherAdmin: 403 } },
   { method: "GET", label: "/clients/<own clinic's client>/check-ins/<a check-in>", path: () => `/clients/${ids.arthur}/check-ins/${ids.arthurCheckIn}`, secret: () => demo.client.name, expect: { ...staffOnly, ...arthurStaff } },
+  { method: "GET", path: () => "/review", expect: { ...staffOnly, therapist: "ok", otherTherapist: "ok", admin: "ok", otherAdmin: "ok" } },
+  { method: "GET", path: () => "/settings", expect: { anonymous: "in", client: "ok", carer: "ok", therapist: "ok", otherTherapist: "ok", admin: "ok", otherAdmin: "ok" } },
+  { method: "PUT", path: () => "/api/me/notifications", body: {}, expect: { anonymous: 401, client: "ok", carer: "ok", therapist: "ok", otherTherapist: "ok", admin: "ok", otherAdmin: "ok" } },
+  { method: "GET", label: "/api/clients/<own clinic's client>/messages", path: () => `/api/clients/${ids.arthur}/messages`, okStatus: 200, expect: arthurCircle },
+  { method: "POST", label: "/api/clients/<own clinic's client>/messages", path: () => `/api/clients/${ids.arthur}/messages`, body: {}, expect: { ...arthurCircle, admin: 403, otherAdmin: 403 } },
+  { method: "POST", label: "/api/clients/<another client of the clinic>/messages", path: () => `/api/clients/${ids.brenda}/messages`, body: {}, expect: { anonymous: 401, client: 404, carer: 404, therapist: "ok", otherTherapist: 404, admin: 403, otherAdmin: 403 } },
+  { method: "POST", label: "/api/clients/<own clinic's client>/messages/read", path: () => `/api/clients/${ids.arthur}/messages/read`, okStatus: 200, expect: arthurCircle },
+  { method: "POST", label: "/api/clients/<own clinic's client>/programme/confirmations", path: () => `/api/clients/${ids.arthur}/programme/confirmations`, body: {}, expect: { anonymous: 401, client: "ok", carer: "ok", therapist: 403, otherTherapist: 403, admin: 403, otherAdmin: 403 } },
+  { method: "PATCH", label: "/api/flags/<a flag of the demo clinic>", path: () => `/api/flags/${ids.callumFlag}`, body: {}, expect: { anonymous: 401, client: 403, carer: 403, therapist: "ok", otherTherapist: 404, admin: 403, otherAdmin: 403 } },
   { method: "POST", path: () => "/api/programme-templates", body: {}, expect: { anonymous: 401, client: 403, carer: 403, therapist: "ok", otherTherapist: "ok", admin: 403, otherAdmin: 403 } },
   // better-auth endpoints Rampline does not use are not reachable at all, whoever asks.
   ...["/api/auth/sign-up/email", "/api/auth/organization/invite-member", "/api/auth/organization/create", "/api/auth/admin/ban-user", "/api/auth/admin/set-role"].map(

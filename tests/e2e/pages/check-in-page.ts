@@ -12,6 +12,9 @@ export class CheckInPage {
 
   async fill(options: { strength: string; comfort: number; skinA: string; skinB: string; photo?: { name: string; mimeType: string; buffer: Buffer } }) {
     const page = this.page;
+    // After a change nobody has confirmed yet, the log first asks which settings the stimulator had.
+    const which = page.getByRole("group", { name: "Which settings was your stimulator set to?" });
+    if ((await which.count()) > 0) await which.getByRole("radio", { name: /^The new settings/ }).check();
     await page.getByLabel(/^Channel 1 \(.*\), in mA/).fill(options.strength);
     await page.getByRole("group", { name: "How comfortable was it?" }).getByRole("radio", { name: new RegExp(`^${options.comfort}\\b`) }).check();
     await page.getByRole("group", { name: "Movement you saw" }).getByRole("radio", { name: "Some movement" }).check();

@@ -20,4 +20,16 @@ describe("the client's timeline", () => {
     expect(entries.find((e) => e.kind === "version")!.detail).toBe("Redness (in reply to a session log)");
     expect(entries.find((e) => e.kind === "check-in")!.href).toBe("/clients/c1/check-ins/ci");
   });
+
+  it("puts a flag after the log that raised it when both were written at the same moment", () => {
+    const same = at(7);
+    const entries = buildTimeline("c1", {
+      checkIns: [{ id: "ci", createdAt: same, sessionDate: "2026-11-20", minutes: 30, comfort: 6, worstSkin: 3, loggedBy: "Arthur" }],
+      flags: [{ id: "f", createdAt: same, title: "Skin", severity: "review", resolvedAt: null, resolutionNote: null, checkInId: "ci" }],
+      messages: [],
+      versions: [],
+      confirmations: [],
+    });
+    expect(entries.map((e) => e.kind)).toEqual(["flag", "check-in"]);
+  });
 });
