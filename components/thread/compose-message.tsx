@@ -5,7 +5,7 @@ import { Button } from "@/components/ui/button";
 import { FieldError } from "@/components/ui/text-field";
 import { ApiError, sendJson } from "@/lib/api-client";
 
-export function ComposeMessage({ clientId, onSent }: { clientId: string; onSent: () => void }) {
+export function ComposeMessage({ clientId, onSent, about }: { clientId: string; onSent: () => void; about?: { type: "check-in" | "flag"; id: string } }) {
   const [body, setBody] = useState("");
   const [photoIds, setPhotoIds] = useState<string[]>([]);
   const [error, setError] = useState<string | null>(null);
@@ -15,7 +15,7 @@ export function ComposeMessage({ clientId, onSent }: { clientId: string; onSent:
     setBusy(true);
     setError(null);
     try {
-      await sendJson("POST", `/api/clients/${encodeURIComponent(clientId)}/messages`, { body, photoIds });
+      await sendJson("POST", `/api/clients/${encodeURIComponent(clientId)}/messages`, { body, photoIds, ...(about ? { about } : {}) });
       setBody("");
       setPhotoIds([]);
       onSent();
@@ -30,6 +30,7 @@ export function ComposeMessage({ clientId, onSent }: { clientId: string; onSent:
       <label htmlFor="message-body" className="font-bold">
         Your message
       </label>
+      {about ? <p className="text-sm text-ink-soft">This reply will link to the {about.type === "check-in" ? "session log" : "flag"} it is about.</p> : null}
       <textarea
         id="message-body"
         rows={3}

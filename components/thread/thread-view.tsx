@@ -23,7 +23,7 @@ function aboutLink(about: ThreadMessage["about"], clientId: string, staff: boole
 }
 
 // One client's thread, refreshed while open; reading it marks it read. The server prefetches the first page.
-export function ThreadView({ clientId, staff, canWrite }: { clientId: string; staff: boolean; canWrite: boolean }) {
+export function ThreadView({ clientId, staff, canWrite, about }: { clientId: string; staff: boolean; canWrite: boolean; about?: { type: "check-in" | "flag"; id: string } }) {
   const queryClient = useQueryClient();
   const thread = useQuery({ queryKey: threadKey(clientId), queryFn: () => fetchThread(clientId), refetchInterval: 5000 });
   const markRead = useMutation({ mutationFn: () => fetch(`/api/clients/${encodeURIComponent(clientId)}/messages/read`, { method: "POST" }) });
@@ -76,7 +76,7 @@ export function ThreadView({ clientId, staff, canWrite }: { clientId: string; st
         })}
         <li ref={endRef} aria-hidden className="h-0" />
       </ol>
-      {canWrite ? <ComposeMessage clientId={clientId} onSent={() => void queryClient.invalidateQueries({ queryKey: threadKey(clientId) })} /> : null}
+      {canWrite ? <ComposeMessage clientId={clientId} about={about} onSent={() => void queryClient.invalidateQueries({ queryKey: threadKey(clientId) })} /> : null}
     </div>
   );
 }

@@ -2,7 +2,10 @@ import "server-only";
 import { insertAuditEvent } from "@/db/queries/audit";
 import { listThreadMembersByClientId } from "@/db/queries/client-circle";
 import { insertMessage, markThreadReadByUser } from "@/db/queries/messages";
+import { getCheckInById } from "@/db/queries/check-ins";
+import { getFlagById } from "@/db/queries/flags";
 import { listPhotosByIds } from "@/db/queries/photos";
+import { getProgrammeByClientId, getProgrammeVersionById } from "@/db/queries/programmes";
 import { inTransaction, type Transaction, type JobExecutor } from "@/db/transaction";
 import type { Actor } from "@/lib/auth/actor";
 import { requireClientAccess } from "@/lib/auth/access";
@@ -28,6 +31,14 @@ export async function addToThread(
   return row;
 }
 
+// A message may only point at this client's own logs, flags and versions.
+async function aboutBelongsTo(about: { type: "check-in" | "flag" | "version"; id: string }, clientId: string): Promise<boolean> {
+  if (about.type === "check-in") return (await getCheckInById(about.id))?.checkIn.clientId === clientId;
+  if (about.type === "flag") return (await getFlagById(about.id))?.clientId === clientId;
+  const version = await getProgrammeVersionById(about.id);
+  return version !== null && (await getProgrammeByClientId(clientId))?.id === version.programmeId;
+}
+
 export async function postMessage(actor: Actor, clientId: string, input: PostMessageInput) {
   if (actor.role === "admin") throw forbidden();
   const { client } = await requireClientAccess(actor, clientId);
@@ -35,6 +46,9 @@ export async function postMessage(actor: Actor, clientId: string, input: PostMes
   const photos = await listPhotosByIds(data.photoIds);
   if (photos.length !== new Set(data.photoIds).size || photos.some((photo) => photo.clientId !== client.id)) {
     throw new AppError("VALIDATION", "Some fields need attention.", { photoIds: "A photo could not be found. Attach it again." });
+  }
+  if (data.about && !(await aboutBelongsTo(data.about, client.id))) {
+    throw new AppError("VALIDATION", "Some fields need attention.", { about: "That report is not in this client's record." });
   }
   return inTransaction(async (tx, jobs) => {
     const row = await addToThread(tx, jobs, { clientId: client.id, authorId: actor.userId, kind: "message", body: data.body, photoIds: data.photoIds, about: data.about });

@@ -6,6 +6,7 @@ import { CheckInPage } from "./pages/check-in-page";
 import { launchBrowser, newContext } from "./support/browser";
 import { demo } from "./support/demo-accounts";
 import { POLL } from "./support/form-fields";
+import { whenInteractive } from "./support/hydration";
 import { waitForMessage } from "./support/mailbox";
 import { signInAndWaitForHome, type Session } from "./support/people";
 
@@ -60,24 +61,44 @@ describe("logging sessions and what the therapist sees", () => {
     }
   });
 
-  it("logs a session with lasting redness and a photo; the therapist sees the flag, the photo and the settings in force", async () => {
-    const form = new CheckInPage(client.page);
-    await form.open("?minutes=30");
-    await expectNoAxeViolations(client.page);
+  it("runs a guided session from Today on a fake clock, then logs it with lasting redness and a photo; the therapist sees the flag, the photo and the settings in force", async () => {
+    // A page of its own with Playwright's clock installed first, so the 30-minute timer runs in an instant.
+    await client.context.clock.install({ time: new Date() });
+    const page = await client.context.newPage();
+    await page.goto("/today");
+    await page.getByRole("link", { name: "Start a guided session" }).click();
+    await page.waitForURL((url) => url.pathname === "/session");
+    const start = page.getByRole("button", { name: "Start the session timer" });
+    await whenInteractive(start);
+    for (const box of await page.getByRole("group", { name: "Tick each one when it is done" }).getByRole("checkbox").all()) await box.check();
+    await start.click();
+    await page.getByRole("button", { name: "My stimulator is running: start the timer" }).click();
+    await page.clock.fastForward("30:00");
+    const log = page.getByRole("link", { name: "Log this session" });
+    await log.waitFor();
+    expect(await log.getAttribute("href")).toBe("/check-in?minutes=30");
+    await log.click();
+    await page.waitForURL((url) => url.pathname === "/check-in");
+    await page.clock.resume();
+    const form = new CheckInPage(page);
+    await whenInteractive(page.getByRole("button", { name: "Save this session" }));
+    expect(await page.getByLabel("Minutes done").inputValue()).toBe("30");
+    await expectNoAxeViolations(page);
     await form.fill({ strength: "22", comfort: 6, skinA: "No change", skinB: "Red for longer", photo: await rednessImage() });
     await form.save();
     expect(await form.stopAlert().count()).toBe(0);
+    await page.close();
 
-    const { page } = therapist;
-    await page.goto(arthurRecord);
-    const flag = page.getByText(/Skin: red for longer, or still there next time under channel 1, electrode B/).first();
+    const staff = therapist.page;
+    await staff.goto(arthurRecord);
+    const flag = staff.getByText(/Skin: red for longer, or still there next time under channel 1, electrode B/).first();
     await flag.waitFor();
-    await page.getByRole("link", { name: "Open the check-in" }).first().click();
-    await page.getByRole("heading", { level: 1, name: /^Session of/ }).waitFor();
-    expect(await page.getByRole("img", { name: "Skin under channel 1, electrode B, photo 1" }).count()).toBe(1);
-    const settings = await page.getByRole("table", { name: /^Channel 1:/ }).textContent();
+    await staff.getByRole("link", { name: "Open the check-in" }).first().click();
+    await staff.getByRole("heading", { level: 1, name: /^Session of/ }).waitFor();
+    expect(await staff.getByRole("img", { name: "Skin under channel 1, electrode B, photo 1" }).count()).toBe(1);
+    const settings = await staff.getByRole("table", { name: /^Channel 1:/ }).textContent();
     expect(settings).toContain("Pulse duration300 µs");
-    expect(await page.locator("main").textContent()).toContain("ICDRG reading: + weak");
+    expect(await staff.locator("main").textContent()).toContain("ICDRG reading: + weak");
   });
 
   it("shows the stop message at once for blisters, and puts an urgent flag and an e-mail in front of the therapist", async () => {

@@ -6,6 +6,7 @@ import { Card, EmptyState } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import { listCarersByClientId } from "@/db/queries/carers";
 import { listCheckInsByClientId } from "@/db/queries/check-ins";
+import { countUnreadForUser } from "@/db/queries/messages";
 import { getClientById } from "@/db/queries/clients";
 import { getProgrammeByClientId, listVersionsByProgrammeId } from "@/db/queries/programmes";
 import { requirePageActor } from "@/lib/auth/page-guards";
@@ -36,10 +37,11 @@ export default async function TodayPage() {
   const versions = programme ? await listVersionsByProgrammeId(programme.id) : [];
   const current = versions[0];
   const content = current ? (current.version.content as ProgrammeContent) : null;
-  const [doneToday, carers, pack] = await Promise.all([
+  const [doneToday, carers, pack, unread] = await Promise.all([
     current ? listCheckInsByClientId(client.id, { from: today }) : Promise.resolve([]),
     actor.role === "client" ? listCarersByClientId(client.id) : Promise.resolve([]),
     content ? readPackStatus(client.id, content.schedule.replaceElectrodesAfterUses ?? null) : Promise.resolve(null),
+    countUnreadForUser(actor.userId, [client.id]),
   ]);
   const firstName = actor.name.split(" ")[0];
   const recentlyChanged = current !== undefined && versions.length > 1 && current.version.publishedAt.getTime() > new Date(`${today}T00:00:00Z`).getTime() - RECENT_MS;
@@ -51,6 +53,11 @@ export default async function TodayPage() {
         <h1 className="text-3xl">Hello, {firstName}</h1>
         {actor.role === "carer" ? <p className="mt-1">You are helping {client.fullName}.</p> : null}
       </div>
+      {unread > 0 ? (
+        <Notice tone="note" word={unread === 1 ? "1 new message" : `${unread} new messages`}>
+          <Link href="/messages">Read {unread === 1 ? "it" : "them"}</Link>.
+        </Notice>
+      ) : null}
       {current && recentlyChanged ? (
         <Notice tone="note" word="Programme changed">
           {whose} therapist published version {current.version.number} on {longDate.format(current.version.publishedAt)}.{" "}

@@ -42,6 +42,10 @@ export default async function CheckInPage({ params }: { params: Promise<{ client
           {checkIn.loggedByRole === "carer" ? " (carer, on the client's behalf)" : " (the client)"} · against programme version {versionNumber ?? "?"}
         </p>
       </div>
+      <p className="flex flex-wrap gap-4">
+        <Link href={`/clients/${client.id}/messages?about=check-in:${checkIn.id}`}>Reply about this session</Link>
+        <Link href={`/clients/${client.id}/programme?prompt=check-in:${checkIn.id}`}>Propose a change</Link>
+      </p>
       {flags.map((flag) => (
         <Notice key={flag.id} tone={flag.severity === "urgent" ? "blocks" : "warning"} word={flag.severity === "urgent" ? "Urgent" : "Review"} title={flag.title}>
           Status: {flag.status}.
