@@ -7,7 +7,7 @@ import { TextField } from "@/components/ui/text-field";
 import { sendJson } from "@/lib/api-client";
 import { recordClearanceSchema } from "@/lib/screening/clearance-schema";
 import type { RedFlagId } from "@/lib/screening/questions";
-import { TextAreaField } from "./text-area-field";
+import { TextAreaField } from "@/components/ui/text-area-field";
 
 // Records that a named clinician (the client's cardiologist, say) has cleared one red flag of one screening.
 export function ClearanceForm({ clientId, screeningId, flag, flagLabel }: { clientId: string; screeningId: string; flag: RedFlagId; flagLabel: string }) {

@@ -3,6 +3,7 @@ import { useState } from "react";
 import { FormAlert } from "@/components/forms/form-alert";
 import { useApiForm } from "@/components/forms/use-api-form";
 import { Button } from "@/components/ui/button";
+import { TextAreaField } from "@/components/ui/text-area-field";
 import { FieldError, TextField } from "@/components/ui/text-field";
 import { sendJson } from "@/lib/api-client";
 import { checkInSchema } from "@/lib/check-ins/schema";
@@ -109,13 +110,7 @@ export function CheckInForm({ clientId, today, defaultMinutes, channels, clinicP
         registration={form.register("electrodeCondition")}
         error={errors.electrodeCondition?.message}
       />
-      <div className="flex flex-col gap-1">
-        <label htmlFor="check-in-notes" className="font-bold">
-          Anything else for your therapist (optional)
-        </label>
-        <textarea id="check-in-notes" rows={3} className="rounded-md border-2 border-line bg-white px-3 py-2" {...form.register("notes")} />
-        {errors.notes?.message ? <FieldError id="notes-error" message={errors.notes.message} /> : null}
-      </div>
+      <TextAreaField label="Anything else for your therapist (optional)" {...form.register("notes")} error={errors.notes?.message} />
       <Button type="submit" large busy={busy}>
         Save this session
       </Button>

@@ -6,6 +6,7 @@ import { useApiForm } from "@/components/forms/use-api-form";
 import { Button } from "@/components/ui/button";
 import { Choice } from "@/components/ui/choice-fields";
 import { Notice } from "@/components/ui/notice";
+import { TextAreaField } from "@/components/ui/text-area-field";
 import { TextField } from "@/components/ui/text-field";
 import { sendJson } from "@/lib/api-client";
 import { clientDetailsSchema } from "@/lib/clients/schemas";
@@ -44,13 +45,7 @@ export function ClientDetailsForm({ clientId, details, canEdit }: { clientId: st
           </div>
         </fieldset>
         <TextField label="Date of onset" type="date" className="sm:max-w-xs" {...form.register("onsetDate")} error={errors.onsetDate?.message} />
-        <div className="flex flex-col gap-1">
-          <label htmlFor="client-goals" className="font-bold">
-            Goals
-          </label>
-          <textarea id="client-goals" rows={3} className="rounded-md border-2 border-line bg-white px-3 py-2" {...form.register("goals")} />
-          {errors.goals?.message ? <p className="text-sm font-bold text-blocks">{errors.goals.message}</p> : null}
-        </div>
+        <TextAreaField label="Goals" {...form.register("goals")} error={errors.goals?.message} />
       </fieldset>
       {canEdit ? (
         <div>

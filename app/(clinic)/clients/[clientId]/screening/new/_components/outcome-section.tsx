@@ -1,6 +1,6 @@
 "use client";
 import { useFormContext } from "react-hook-form";
-import { TextAreaField } from "@/components/screening/text-area-field";
+import { TextAreaField } from "@/components/ui/text-area-field";
 import { TextField } from "@/components/ui/text-field";
 import { OUTCOME_TEXT as T } from "@/lib/screening/field-text";
 import { OUTCOME_LABELS } from "@/lib/screening/questions";

@@ -1,6 +1,6 @@
 "use client";
 import { useFormContext, useWatch } from "react-hook-form";
-import { TextAreaField } from "@/components/screening/text-area-field";
+import { TextAreaField } from "@/components/ui/text-area-field";
 import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/text-field";
 import { SITE_TEXT as T } from "@/lib/screening/field-text";

@@ -1,6 +1,6 @@
 "use client";
 import { useFormContext, useWatch } from "react-hook-form";
-import { TextAreaField } from "@/components/screening/text-area-field";
+import { TextAreaField } from "@/components/ui/text-area-field";
 import { TEST_TEXT as T } from "@/lib/screening/field-text";
 import { MOVEMENT_LABELS, SKIN_AFTER_LABELS, TOLERANCE_LABELS } from "@/lib/screening/questions";
 import type { ScreeningFormValues } from "@/lib/screening/schema";
