@@ -1,4 +1,5 @@
 import type { Browser, BrowserContext, Page } from "playwright-core";
+import { whenInteractive } from "./support/hydration";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { demoClinic } from "@/db/seed/demo-clinic";
 import { AcceptInvitationPage } from "./pages/accept-invitation-page";
@@ -65,6 +66,7 @@ describe("joining a clinic by invitation", () => {
     expect(invitedLine).toContain(therapist.email);
     expect(invitedLine).toContain("as therapist");
     // The admin's spelling of the name is offered, and the therapist may correct it.
+    await whenInteractive(invitation.nameField());
     expect(await invitation.nameField().inputValue()).toBe(therapist.invitedAs);
 
     await invitation.accept(therapist.name, "short one", "short one");

@@ -22,7 +22,8 @@ export function AcceptInvitationForm({ invitationId, suggestedName }: { invitati
   return (
     <form method="post" onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
       <FormAlert message={formError} />
-      <TextField label="Your name" autoComplete="name" {...form.register("name")} error={errors.name?.message} />
+      {/* The suggested name is in the server's HTML too, so it shows before the page's scripts have loaded. */}
+      <TextField label="Your name" autoComplete="name" defaultValue={suggestedName} {...form.register("name")} error={errors.name?.message} />
       <TextField
         label="Choose a password"
         hint="At least 10 characters. A short sentence is easy to remember and hard to guess."
